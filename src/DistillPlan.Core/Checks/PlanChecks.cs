@@ -191,7 +191,9 @@ public static class PlanChecks
     public static Check? ExtrapolatedCurve(CheckContext c)
     {
         var outside = c.System.Components.Where(s =>
-            !s.VaporPressure.Curves.Any(k => k.Covers(c.Vapor.Kelvin)) || !s.VaporPressure.Curves.Any(k => k.Covers(c.Equipment.Coolant.Kelvin)))
+            !s.VaporPressure.Curves.Any(k => k.Covers(c.Vapor.Kelvin))
+            // The coolant side matters only while the condensate is liquid.
+            || (c.Equipment.Coolant.Kelvin > (s.MeltingPointK ?? 0) && !s.VaporPressure.Curves.Any(k => k.Covers(c.Equipment.Coolant.Kelvin))))
             .Select(s => s.Name).ToList();
         if (!c.Extrapolated && outside.Count == 0) return null;
         return new("extrapolated-curve", Severity.Caution,

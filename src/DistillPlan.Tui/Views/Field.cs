@@ -1,0 +1,30 @@
+using Terminal.Gui.ViewBase;
+using Terminal.Gui.Views;
+
+namespace DistillPlan.Tui.Views;
+
+/// <summary>
+/// A labelled text entry with a hint to its right: the building block of the input panes.
+/// Laid out below <paramref name="above"/> so panes stack fields by relationship.
+/// </summary>
+internal sealed class Field
+{
+    public Label Caption { get; }
+    public TextField Entry { get; }
+    public Label Hint { get; }
+
+    public Field(View parent, View? above, string caption, int labelWidth, int entryWidth, Action<string> changed)
+    {
+        Caption = new Label { Text = caption, X = 0, Y = above is null ? 0 : Pos.Bottom(above), Width = labelWidth };
+        Entry = new TextField { X = Pos.Right(Caption), Y = Pos.Top(Caption), Width = entryWidth };
+        Hint = new Label { X = Pos.Right(Entry) + 1, Y = Pos.Top(Caption), Width = Dim.Fill() };
+        Entry.TextChanged += (_, _) => changed(Entry.Text);
+        parent.Add(Caption, Entry, Hint);
+    }
+
+    /// <summary>Shows a value without echoing it back as an edit when it is already there.</summary>
+    public void Show(string value)
+    {
+        if (Entry.Text != value) Entry.Text = value;
+    }
+}

@@ -7,8 +7,8 @@ public abstract class DistillPlanException(string message, Exception? inner = nu
 /// Input the user gave that cannot be used. The message names the field, the value and what
 /// is allowed, in one line, so the CLI can print it as it is and exit with code 2.
 /// </summary>
-public class InputException(string field, string value, string allowed)
-    : DistillPlanException($"{field}: '{value}' is not allowed; {allowed}")
+public class InputException(string field, string value, string allowed, string? message = null)
+    : DistillPlanException(message ?? $"{field}: '{value}' is not valid; expected {allowed}")
 {
     /// <summary>The option, argument or file field the bad value came from.</summary>
     public string Field { get; } = field;
@@ -20,10 +20,10 @@ public class InputException(string field, string value, string allowed)
 
 /// <summary>A solvent name, alias or CAS number that the library does not hold.</summary>
 public sealed class UnknownSolventException(string name, IReadOnlyList<string> suggestions)
-    : InputException("solvent", name,
-        suggestions.Count > 0
-            ? $"not in the library; nearest names: {string.Join(", ", suggestions)}"
-            : "not in the library; `distillplan solvents` lists the names")
+    : InputException("solvent", name, "a name, alias or CAS number of the library",
+        $"solvent: '{name}' is not in the library; " + (suggestions.Count > 0
+            ? $"nearest names: {string.Join(", ", suggestions)}"
+            : "`distillplan solvents` lists the names"))
 {
     /// <summary>The nearest library names, best first.</summary>
     public IReadOnlyList<string> Suggestions { get; } = suggestions;

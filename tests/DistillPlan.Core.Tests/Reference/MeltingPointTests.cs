@@ -1,6 +1,6 @@
 namespace DistillPlan.Core.Tests.Reference;
 
-/// <summary>Transcription check: the library's melting points are the CRC figures.</summary>
+/// <summary>Copying check: the library's melting points are the CRC figures, to 0.01 K.</summary>
 public class MeltingPointTests
 {
     public static TheoryData<string, string, double> CrcMeltingPoints()

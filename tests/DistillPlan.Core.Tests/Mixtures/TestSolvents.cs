@@ -44,6 +44,17 @@ internal static class TestSolvents
     public static MixtureComponent Isopropanol { get; } =
         Antoine("2-propanol", 60.096, 10.24268, 1580.92, -53.54, 780.925, (1, 2), (3, 1), (14, 1)); // Poling 281–373 K
 
+    /// <summary>1,2-dichloroethane (2 × CH2Cl); Antoine from Poling 2001 (267–380 K).</summary>
+    public static MixtureComponent Dichloroethane { get; } =
+        Antoine("1,2-dichloroethane", 98.959, 9.28356, 1341.37, -43.1, 1245.425, (44, 2));
+
+    /// <summary>DMSO (subgroup 67); DIPPR-101 from Perry's Handbook, 8th ed., Table 2-8
+    /// (291.67–729 K): ln(P/Pa) = C1 + C2/T + C3 ln T + C4 T^C5.</summary>
+    public static MixtureComponent Dmso { get; } =
+        new("dimethyl sulfoxide", 78.133,
+            t => Math.Exp(56.273 - 7620.6 / t - 4.6279 * Math.Log(t) + 4.3819e-7 * t * t),
+            new Dictionary<int, int> { [67] = 1 }, 1101.025);
+
     /// <summary>Water: Wagner–Pruß (1993) saturation pressure; H2O is UNIFAC subgroup 16;
     /// density 997 kg/m³ at 25 °C (from memory).</summary>
     public static MixtureComponent Water { get; } =
@@ -85,6 +96,8 @@ internal static class TestSolvents
         "n-pentane" => Pentane,
         "2-propanol" => Isopropanol,
         "water" => Water,
+        "1,2-dichloroethane" => Dichloroethane,
+        "dimethyl sulfoxide" => Dmso,
         _ => throw new ArgumentException($"no test solvent '{name}'"),
     };
 

@@ -1,0 +1,81 @@
+using System.CommandLine;
+using DistillPlan.Cli.Commands;
+using DistillPlan.Core;
+
+namespace DistillPlan.Cli;
+
+/// <summary>
+/// The command line: builds the verbs, runs one, and turns every failure into one line on
+/// stderr with the documented exit code (0 done, 2 bad input, 1 internal error).
+/// </summary>
+public static class CliApp
+{
+    /// <summary>Exit code for success (warnings included).</summary>
+    public const int Ok = 0;
+    /// <summary>Exit code for an unexpected internal error.</summary>
+    public const int InternalError = 1;
+    /// <summary>Exit code for bad input.</summary>
+    public const int BadInput = 2;
+
+    /// <summary>Hook for the text UI, set by the executable; null in tests that never open it.</summary>
+    public static Func<string[], int>? OpenPlanner { get; set; }
+
+    /// <summary>The root command with every verb.</summary>
+    public static RootCommand BuildRoot()
+    {
+        var root = new RootCommand(
+            "DistillPlan: bath temperature, vacuum setpoint and condenser temperature for evaporating solvents under vacuum. " +
+            "Run without a verb to open the full-screen planner.");
+        root.Subcommands.Add(SetpointsCommand.Build());
+        root.Subcommands.Add(CurveCommand.Build());
+        root.Subcommands.Add(SolventsCommand.Build());
+        foreach (var extra in ExtraCommands) root.Subcommands.Add(extra());
+        return root;
+    }
+
+    /// <summary>Further verbs registered by other parts of the program (mixtures).</summary>
+    internal static List<Func<Command>> ExtraCommands { get; } = [];
+
+    /// <summary>Runs the program with arguments, writing to the given streams.</summary>
+    public static int Run(string[] args, TextWriter output, TextWriter error)
+    {
+        if (args.Length == 0)
+        {
+            if (OpenPlanner is null)
+            {
+                error.WriteLine("distillplan: the text UI is not available in this build; give a verb (distillplan --help)");
+                return BadInput;
+            }
+            return Guard(() => OpenPlanner(args), error);
+        }
+
+        var root = BuildRoot();
+        var parse = root.Parse(args);
+        if (parse.Errors.Count > 0)
+        {
+            string verb = parse.CommandResult.Command == root ? "" : " " + parse.CommandResult.Command.Name;
+            error.WriteLine($"distillplan: {parse.Errors[0].Message} (see distillplan{verb} --help)");
+            return BadInput;
+        }
+        return Guard(() => parse.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false }), error);
+    }
+
+    /// <summary>Runs an action and maps the exception family to one line and an exit code.</summary>
+    internal static int Guard(Func<int> action, TextWriter error)
+    {
+        try
+        {
+            return action();
+        }
+        catch (DistillPlanException e) when (e is not NoConvergenceException)
+        {
+            error.WriteLine("distillplan: " + e.Message);
+            return BadInput;
+        }
+        catch (Exception e)
+        {
+            error.WriteLine($"distillplan: internal error: {e.GetType().Name}: {e.Message.Split('\n')[0]} (please report it)");
+            return InternalError;
+        }
+    }
+}

@@ -1,0 +1,116 @@
+using System.CommandLine;
+using DistillPlan.Cli.Output;
+using DistillPlan.Core;
+using DistillPlan.Core.Library;
+using DistillPlan.Core.Quantities;
+using DistillPlan.Core.VaporPressure;
+
+namespace DistillPlan.Cli.Commands;
+
+/// <summary>
+/// <c>distillplan curve NAME</c>: the vapour-pressure curve of one solvent; <c>--at P</c> gives
+/// the boiling temperature, <c>--temp T</c> the vapour pressure, neither a table.
+/// </summary>
+internal static class CurveCommand
+{
+    public static Command Build()
+    {
+        var common = new CommonOptions();
+        var name = new Argument<string>("name") { Description = "Solvent name, alias or CAS number." };
+        var at = new Option<string?>("--at") { Description = "Pressure to give the boiling temperature at (25mbar, 15 Torr, -0.9barg; bare number = mbar)." };
+        var temp = new Option<string?>("--temp") { Description = "Temperature to give the vapour pressure at (60, 60C, 333K, 140F; bare number = °C)." };
+        var atmospheric = new Option<string?>("--atmospheric") { Description = "Local atmospheric pressure, for gauge readings in --at (default 1013.25 mbar)." };
+        var cmd = new Command("curve", "Vapour pressure at a temperature, or boiling temperature at a pressure, with the source of the curve.");
+        cmd.Arguments.Add(name);
+        cmd.Options.Add(at);
+        cmd.Options.Add(temp);
+        cmd.Options.Add(atmospheric);
+        common.AddOutput(cmd);
+
+        cmd.SetAction(r =>
+        {
+            var library = common.LoadLibrary(r);
+            var unit = common.DisplayUnit(r);
+            var solvent = library.Find(r.GetValue(name)!);
+            string? atText = r.GetValue(at), tempText = r.GetValue(temp);
+            var o = r.InvocationConfiguration.Output;
+            bool json = r.GetValue(common.Json);
+            if (atText is not null && tempText is not null)
+                throw new InputException("--at", atText, "either --at (a pressure) or --temp (a temperature), not both");
+
+            if (atText is not null)
+            {
+                var atmosphere = new Core.Planning.PlanInputs { Atmospheric = r.GetValue(atmospheric) }.ParseAtmosphere();
+                var p = PressureUnits.Parse(atText, "--at", atmosphere);
+                var t = solvent.VaporPressure.SaturationTemperature(p.Pascal);
+                if (json)
+                    Json.Write(o, new
+                    {
+                        solvent = solvent.Name, boiling_temperature_c = Json.R(t.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
+                        pressure_mbar = Json.R(p.Millibar, 4), source = library.Cite(t.Curve.Source), source_key = t.Curve.Source,
+                        form = t.Curve.Form, extrapolated = t.Extrapolated, range_c = Range(t.Curve),
+                    });
+                else
+                    o.WriteLine($"{solvent.Name} boils at {Temperature.FromKelvin(t.TemperatureK)} at {PressureUnits.Format(p, unit)}" +
+                                $"{(t.Extrapolated ? "  (EXTRAPOLATED beyond the fitted range)" : "")}\n  curve: {t.Curve.Form}, {library.Cite(t.Curve.Source)}");
+                return CliApp.Ok;
+            }
+            if (tempText is not null)
+            {
+                var t = TemperatureUnits.Parse(tempText, "--temp");
+                var p = solvent.VaporPressure.SaturationPressure(t.Kelvin);
+                if (json)
+                    Json.Write(o, new
+                    {
+                        solvent = solvent.Name, vapor_pressure_mbar = Json.R(p.PressurePa / 100, 5), temperature_c = Json.R(t.Celsius, 3),
+                        source = library.Cite(p.Curve.Source), source_key = p.Curve.Source, form = p.Curve.Form,
+                        extrapolated = p.Extrapolated, range_c = Range(p.Curve),
+                    });
+                else
+                    o.WriteLine($"{solvent.Name} vapour pressure at {t}: {PressureUnits.Format(Pressure.FromPascal(p.PressurePa), unit)}" +
+                                $"{(p.Extrapolated ? "  (EXTRAPOLATED beyond the fitted range)" : "")}\n  curve: {p.Curve.Form}, {library.Cite(p.Curve.Source)}");
+                return CliApp.Ok;
+            }
+            WriteTable(o, solvent, library, unit, json);
+            return CliApp.Ok;
+        });
+        return cmd;
+    }
+
+    private static double[] Range(IVaporPressureCurve c) =>
+        [Json.R(c.TMinK - PhysicalConstants.ZeroCelsiusK, 2), Json.R(c.TMaxK - PhysicalConstants.ZeroCelsiusK, 2)];
+
+    /// <summary>Boiling temperatures at the pressures people set on a controller.</summary>
+    private static readonly double[] TablePressuresMbar = [1, 2, 5, 10, 20, 50, 100, 200, 300, 500, 700, 1013.25];
+
+    private static void WriteTable(TextWriter o, Solvent s, SolventLibrary library, PressureUnit unit, bool json)
+    {
+        var rows = new List<(double Mbar, TsatResult? T)>();
+        foreach (double mbar in TablePressuresMbar)
+        {
+            try { rows.Add((mbar, s.VaporPressure.SaturationTemperature(mbar * 100))); }
+            catch (DistillPlanException) { rows.Add((mbar, null)); }
+        }
+        if (json)
+        {
+            Json.Write(o, new
+            {
+                solvent = s.Name,
+                points = rows.Where(r => r.T is not null).Select(r => new
+                {
+                    pressure_mbar = r.Mbar, boiling_temperature_c = Json.R(r.T!.Value.TemperatureK - PhysicalConstants.ZeroCelsiusK, 2),
+                    source_key = r.T.Value.Curve.Source, extrapolated = r.T.Value.Extrapolated,
+                }).ToList(),
+                curves = s.VaporPressure.Curves.Select(c => new { form = c.Form, source = library.Cite(c.Source), source_key = c.Source, range_c = Range(c) }).ToList(),
+            });
+            return;
+        }
+        o.WriteLine($"{s.Name}: boiling temperature by pressure");
+        foreach (var (mbar, t) in rows)
+            o.WriteLine($"  {PressureUnits.Format(Pressure.FromMillibar(mbar), unit),14}  " +
+                        (t is null ? "—" : $"{Temperature.FromKelvin(t.Value.TemperatureK),9}{(t.Value.Extrapolated ? "  extrapolated" : "")}"));
+        o.WriteLine("Curves, in the order they are tried:");
+        foreach (var c in s.VaporPressure.Curves)
+            o.WriteLine($"  {c.Form,-18} {Temperature.FromKelvin(c.TMinK)} to {Temperature.FromKelvin(c.TMaxK)}  {library.Cite(c.Source)}");
+    }
+}

@@ -1,0 +1,82 @@
+using DistillPlan.Core.VaporPressure;
+
+namespace DistillPlan.Core.Library;
+
+/// <summary>How a solvent behaves towards peroxide formation (classes after Kelly, Chem. Health Saf. 3(5) (1996) 28).</summary>
+public enum PeroxideClass
+{
+    /// <summary>Not a known peroxide former.</summary>
+    None,
+    /// <summary>Forms peroxides slowly (e.g. cyclopentyl methyl ether).</summary>
+    Slow,
+    /// <summary>Peroxides become a hazard on concentration (THF, diethyl ether, dioxane …).</summary>
+    OnConcentration,
+    /// <summary>Forms explosive peroxides even in storage (diisopropyl ether).</summary>
+    Severe,
+}
+
+/// <summary>Behaviour flags a planner warns about.</summary>
+[Flags]
+public enum SolventFlags
+{
+    /// <summary>No flag.</summary>
+    None = 0,
+    /// <summary>Prone to bumping (superheats, boils violently): water, alcohols, DMSO …</summary>
+    BumpingProne = 1,
+    /// <summary>Vapour toxic enough to require extraction (benzene, CCl4, chloroform …).</summary>
+    ToxicVapor = 2,
+    /// <summary>Prone to foaming.</summary>
+    Foaming = 4,
+    /// <summary>Takes up water from the air.</summary>
+    Hygroscopic = 8,
+}
+
+/// <summary>One solvent of the library, in SI units, with the source key of each number.</summary>
+public sealed record Solvent
+{
+    /// <summary>Display name.</summary>
+    public required string Name { get; init; }
+    /// <summary>Other names people type (EtOAc, THF …).</summary>
+    public IReadOnlyList<string> Aliases { get; init; } = [];
+    /// <summary>CAS registry number.</summary>
+    public required string Cas { get; init; }
+    /// <summary>Molecular formula, for display.</summary>
+    public string? Formula { get; init; }
+    /// <summary>Molar mass [g/mol].</summary>
+    public required double MolarMassGPerMol { get; init; }
+    /// <summary>Liquid density near room temperature [kg/m³].</summary>
+    public double? LiquidDensityKgPerM3 { get; init; }
+    /// <summary>Melting point [K].</summary>
+    public double? MeltingPointK { get; init; }
+    /// <summary>Normal boiling point, at 101325 Pa [K] (tabulated value, not computed).</summary>
+    public required double NormalBoilingPointK { get; init; }
+    /// <summary>Critical temperature [K].</summary>
+    public double? CriticalTemperatureK { get; init; }
+    /// <summary>Critical pressure [Pa].</summary>
+    public double? CriticalPressurePa { get; init; }
+    /// <summary>Closed-cup flash point [K].</summary>
+    public double? FlashPointK { get; init; }
+    /// <summary>Autoignition temperature [K].</summary>
+    public double? AutoignitionK { get; init; }
+    /// <summary>Peroxide-formation class.</summary>
+    public PeroxideClass PeroxideClass { get; init; }
+    /// <summary>Behaviour flags.</summary>
+    public SolventFlags Flags { get; init; }
+    /// <summary>UNIFAC (original) subgroup id → count, when assigned.</summary>
+    public IReadOnlyDictionary<int, int>? UnifacGroups { get; init; }
+    /// <summary>The ranked vapour-pressure curves.</summary>
+    public required VaporPressureModel VaporPressure { get; init; }
+    /// <summary>Enthalpy of vaporization, when tabulated.</summary>
+    public IEnthalpyOfVaporization? EnthalpyOfVaporization { get; init; }
+    /// <summary>Source key of each field, by field name as written in the YAML.</summary>
+    public IReadOnlyDictionary<string, string> Sources { get; init; } = new Dictionary<string, string>();
+    /// <summary>File and line the entry was read from, for messages.</summary>
+    public string Origin { get; init; } = "";
+
+    /// <summary>ΔHvap at T [J/mol]: tabulated when available, else implied by the vapour-pressure curve.</summary>
+    public double EnthalpyJPerMol(double temperatureK) =>
+        EnthalpyOfVaporization?.At(temperatureK) ?? VaporPressure.ImpliedEnthalpyJPerMol(temperatureK);
+
+    /// <summary>Molar volume of the liquid [m³/mol], for volume amounts.</summary>
+    public double? MolarVolumeM3PerMol => LiquidDensityKgPerM3 is double rho ? MolarMassGPerMol / 1000.0 / rho : null;
+}

@@ -1,0 +1,160 @@
+namespace DistillPlan.Core.Library;
+
+/// <summary>
+/// The solvents a plan can use: the shipped <c>solvents.yaml</c>, with a user's file merged
+/// over it (an entry with the same CAS number, or name, replaces the shipped one).
+/// Lookup is by name, alias or CAS number, case-insensitive, with spaces, hyphens and
+/// underscores interchangeable.
+/// </summary>
+public sealed class SolventLibrary
+{
+    /// <summary>File name of the shipped library.</summary>
+    public const string FileName = "solvents.yaml";
+
+    private readonly Dictionary<string, Solvent> _byKey;
+
+    private SolventLibrary(IReadOnlyList<Solvent> solvents, IReadOnlyDictionary<string, string> sources, IReadOnlyList<string> files)
+    {
+        Solvents = solvents;
+        Citations = sources;
+        Files = files;
+        _byKey = new Dictionary<string, Solvent>(StringComparer.Ordinal);
+        foreach (var s in solvents)
+            foreach (string key in new[] { s.Name, s.Cas }.Concat(s.Aliases))
+            {
+                string k = Normalise(key);
+                if (_byKey.TryGetValue(k, out var other) && !ReferenceEquals(other, s))
+                    throw new LibraryFormatException(s.Origin.Split(':')[0], int.TryParse(s.Origin.Split(':').Last(), out int l) ? l : 0,
+                        "aliases", $"'{key}' of {s.Name} is also a name of {other.Name} ({other.Origin})");
+                _byKey[k] = s;
+            }
+    }
+
+    /// <summary>All solvents, shipped first, then the user's additions.</summary>
+    public IReadOnlyList<Solvent> Solvents { get; }
+    /// <summary>Full citation text by source key.</summary>
+    public IReadOnlyDictionary<string, string> Citations { get; }
+    /// <summary>The files the library was read from, in merge order.</summary>
+    public IReadOnlyList<string> Files { get; }
+
+    /// <summary>The citation for a source key, or the key itself when it is not defined.</summary>
+    public string Cite(string sourceKey) => Citations.TryGetValue(sourceKey, out var c) ? c : sourceKey;
+
+    /// <summary>Reads one library file on its own.</summary>
+    public static SolventLibrary Load(string path)
+    {
+        var file = SolventYamlLoader.Load(path);
+        return new SolventLibrary(file.Solvents, file.Sources, [path]);
+    }
+
+    /// <summary>
+    /// The shipped library merged with the user's: <paramref name="userPath"/> when given
+    /// (it must exist), else the per-user default file when it exists.
+    /// </summary>
+    public static SolventLibrary LoadWithUser(string? userPath)
+    {
+        string shippedPath = FindShipped();
+        var shipped = SolventYamlLoader.Load(shippedPath);
+        string? user = userPath ?? (File.Exists(DefaultUserPath) ? DefaultUserPath : null);
+        if (user is null) return new SolventLibrary(shipped.Solvents, shipped.Sources, [shippedPath]);
+        if (!File.Exists(user))
+            throw new InputException("--library", user, "a readable solvents YAML file (docs/solvents-schema.md)");
+
+        var mine = SolventYamlLoader.Load(user, shipped.Sources);
+        var merged = shipped.Solvents.ToList();
+        foreach (var s in mine.Solvents)
+        {
+            int i = merged.FindIndex(x => x.Cas == s.Cas || Normalise(x.Name) == Normalise(s.Name));
+            if (i >= 0) merged[i] = s; else merged.Add(s);
+        }
+        return new SolventLibrary(merged, mine.Sources, [shippedPath, user]);
+    }
+
+    /// <summary>The shipped library alone.</summary>
+    public static SolventLibrary LoadShipped() => Load(FindShipped());
+
+    /// <summary>The per-user library file: $XDG_CONFIG_HOME/distillplan/solvents.yaml, else ~/.config/distillplan/solvents.yaml.</summary>
+    public static string DefaultUserPath
+    {
+        get
+        {
+            string? xdg = Environment.GetEnvironmentVariable("XDG_CONFIG_HOME");
+            string config = string.IsNullOrEmpty(xdg)
+                ? Path.Combine(Environment.GetFolderPath(Environment.SpecialFolder.UserProfile), ".config")
+                : xdg;
+            return Path.Combine(config, "distillplan", FileName);
+        }
+    }
+
+    /// <summary>
+    /// Where the shipped library is: $DISTILLPLAN_SHIPPED_LIBRARY, next to the executable (the
+    /// build copies it there), or in a parent folder (running from a source checkout).
+    /// </summary>
+    public static string FindShipped()
+    {
+        string? env = Environment.GetEnvironmentVariable("DISTILLPLAN_SHIPPED_LIBRARY");
+        if (!string.IsNullOrEmpty(env)) return env;
+        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
+        {
+            string candidate = Path.Combine(dir.FullName, FileName);
+            if (File.Exists(candidate)) return candidate;
+        }
+        throw new LibraryFormatException(FileName, 0, "file", "the shipped solvent library was not found next to the program or above it");
+    }
+
+    /// <summary>The solvent for a name, alias or CAS number; throws with suggestions when unknown.</summary>
+    public Solvent Find(string nameAliasOrCas) =>
+        TryFind(nameAliasOrCas, out var s) ? s! : throw new UnknownSolventException(nameAliasOrCas, Suggest(nameAliasOrCas));
+
+    /// <summary>The solvent for a name, alias or CAS number, when the library holds it.</summary>
+    public bool TryFind(string nameAliasOrCas, out Solvent? solvent) =>
+        _byKey.TryGetValue(Normalise(nameAliasOrCas), out solvent);
+
+    /// <summary>
+    /// Solvents whose name, alias or CAS contains the text (for type-to-search), best first:
+    /// exact, then prefix, then substring matches.
+    /// </summary>
+    public IReadOnlyList<Solvent> Search(string text)
+    {
+        string q = Normalise(text);
+        if (q.Length == 0) return Solvents;
+        return Solvents
+            .Select(s => (s, rank: Keys(s).Select(k => k == q ? 0 : k.StartsWith(q, StringComparison.Ordinal) ? 1 : k.Contains(q, StringComparison.Ordinal) ? 2 : 9).Min()))
+            .Where(t => t.rank < 9).OrderBy(t => t.rank).ThenBy(t => t.s.Name, StringComparer.Ordinal).Select(t => t.s).ToList();
+    }
+
+    /// <summary>Up to <paramref name="count"/> library names nearest to a misspelt one (edit distance).</summary>
+    public IReadOnlyList<string> Suggest(string text, int count = 3)
+    {
+        string q = Normalise(text);
+        return Solvents
+            .Select(s => (s.Name, d: Keys(s).Min(k => EditDistance(q, k) - (k.StartsWith(q, StringComparison.Ordinal) && q.Length >= 2 ? q.Length : 0))))
+            .OrderBy(t => t.d).ThenBy(t => t.Name, StringComparer.Ordinal)
+            .Where(t => t.d <= Math.Max(3, q.Length / 2))
+            .Take(count).Select(t => t.Name).ToList();
+    }
+
+    private static IEnumerable<string> Keys(Solvent s) => new[] { s.Name, s.Cas }.Concat(s.Aliases).Select(Normalise);
+
+    /// <summary>Lower case, with spaces, hyphens and underscores made the same.</summary>
+    public static string Normalise(string name) =>
+        string.Join('-', name.Trim().ToLowerInvariant().Split([' ', '-', '_'], StringSplitOptions.RemoveEmptyEntries));
+
+    private static int EditDistance(string a, string b)
+    {
+        var d = new int[b.Length + 1];
+        for (int j = 0; j <= b.Length; j++) d[j] = j;
+        for (int i = 1; i <= a.Length; i++)
+        {
+            int prev = d[0];
+            d[0] = i;
+            for (int j = 1; j <= b.Length; j++)
+            {
+                int tmp = d[j];
+                d[j] = Math.Min(Math.Min(d[j] + 1, d[j - 1] + 1), prev + (a[i - 1] == b[j - 1] ? 0 : 1));
+                prev = tmp;
+            }
+        }
+        return d[b.Length];
+    }
+}

@@ -1,0 +1,294 @@
+using DistillPlan.Core.VaporPressure;
+using YamlDotNet.Core;
+using YamlDotNet.RepresentationModel;
+
+namespace DistillPlan.Core.Library;
+
+/// <summary>What one library file holds: citations by key and solvent entries.</summary>
+/// <param name="Sources">Citation text by source key.</param>
+/// <param name="Solvents">Entries in file order.</param>
+public sealed record LibraryFile(IReadOnlyDictionary<string, string> Sources, IReadOnlyList<Solvent> Solvents);
+
+/// <summary>
+/// Reads a <c>solvents.yaml</c> file (format in docs/solvents-schema.md), validates every entry
+/// and normalises it to SI. Any problem is a <see cref="LibraryFormatException"/> naming file,
+/// line and field.
+/// </summary>
+public static class SolventYamlLoader
+{
+    /// <summary>The format tag the loader understands.</summary>
+    public const string FormatTag = "distillplan-solvents/1";
+
+    private static readonly string[] EntryKeys =
+    [
+        "name", "aliases", "cas", "formula", "molar_mass_g_per_mol", "liquid_density_kg_per_m3", "melting_point_k",
+        "normal_boiling_point_k", "critical", "vapor_pressure", "enthalpy_of_vaporization", "flash_point_k",
+        "autoignition_k", "peroxide_class", "flags", "unifac", "notes",
+    ];
+
+    /// <summary>Reads and validates one file.</summary>
+    /// <param name="path">File to read.</param>
+    /// <param name="knownSources">Source keys defined elsewhere (the shipped file), usable by a user file.</param>
+    public static LibraryFile Load(string path, IReadOnlyDictionary<string, string>? knownSources = null)
+    {
+        string text;
+        try { text = System.IO.File.ReadAllText(path); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new LibraryFormatException(path, 0, "file", "cannot be read: " + e.Message);
+        }
+        return Parse(text, path, knownSources);
+    }
+
+    /// <summary>Parses library text; <paramref name="file"/> is used in messages.</summary>
+    public static LibraryFile Parse(string text, string file, IReadOnlyDictionary<string, string>? knownSources = null)
+    {
+        var stream = new YamlStream();
+        try { stream.Load(new StringReader(text)); }
+        catch (YamlException e)
+        {
+            throw new LibraryFormatException(file, (int)e.Start.Line, "yaml", "not valid YAML: " + e.Message.Split('\n')[0]);
+        }
+        if (stream.Documents.Count == 0) throw new LibraryFormatException(file, 1, "file", "the file is empty");
+
+        var root = new YamlCursor(stream.Documents[0].RootNode, "", file);
+        root.OnlyKeys("format", "sources", "solvents");
+        string format = root.Required("format").String();
+        if (format != FormatTag) throw root.Required("format").Error($"expected '{FormatTag}', got '{format}'");
+
+        var sources = new Dictionary<string, string>(knownSources ?? new Dictionary<string, string>());
+        if (root.Optional("sources") is { } src)
+            foreach (var (key, value) in src.Entries()) sources[key] = value.String();
+
+        var solvents = new List<Solvent>();
+        foreach (var item in root.Required("solvents").Items())
+            solvents.Add(ReadSolvent(item, sources));
+        return new LibraryFile(sources, solvents);
+    }
+
+    private static Solvent ReadSolvent(YamlCursor e, IReadOnlyDictionary<string, string> sources)
+    {
+        e.OnlyKeys(EntryKeys);
+        var fieldSources = new Dictionary<string, string>();
+        string name = e.Required("name").String();
+
+        string SourceOf(YamlCursor c, string field)
+        {
+            var s = c.Required("source");
+            string key = s.String();
+            if (!sources.ContainsKey(key))
+                throw s.Error($"source '{key}' is not defined in the file's 'sources' map");
+            fieldSources[field] = key;
+            return key;
+        }
+
+        // A sourced scalar: {value: 12.3, source: key} (+ extra keys allowed by the caller).
+        double? Sourced(string field, bool required = false, params string[] extra)
+        {
+            var c = required ? e.Required(field) : e.Optional(field);
+            if (c is null) return null;
+            c.OnlyKeys(["value", "source", .. extra]);
+            double v = c.Required("value").Positive();
+            SourceOf(c, field);
+            return v;
+        }
+
+        string cas = e.Required("cas").String();
+        if (!CasNumber.IsValid(cas)) throw e.Required("cas").Error($"'{cas}' is not a valid CAS number (check digit)");
+
+        double molarMass = Sourced("molar_mass_g_per_mol", required: true)!.Value;
+        double density = Sourced("liquid_density_kg_per_m3", false, "at_k") ?? double.NaN;
+        double? tm = Sourced("melting_point_k");
+        double tb = Sourced("normal_boiling_point_k", required: true)!.Value;
+        double? flash = Sourced("flash_point_k");
+        double? autoignition = Sourced("autoignition_k");
+
+        double? tc = null, pc = null;
+        if (e.Optional("critical") is { } crit)
+        {
+            crit.OnlyKeys("tc_k", "pc_pa", "source");
+            tc = crit.Required("tc_k").Positive();
+            pc = crit.Optional("pc_pa")?.Positive();
+            SourceOf(crit, "critical");
+        }
+
+        if (tm is double m && !(m < tb)) throw e.Required("melting_point_k").Error($"melting point {m} K is not below the boiling point {tb} K");
+        if (tc is double t && !(tb < t)) throw e.Required("critical").Error($"critical temperature {t} K is not above the boiling point {tb} K");
+
+        var curves = new List<IVaporPressureCurve>();
+        foreach (var c in e.Required("vapor_pressure").Items()) curves.Add(ReadCurve(c, SourceOf));
+        if (curves.Count == 0) throw e.Required("vapor_pressure").Error("at least one vapour-pressure curve is required");
+
+        IEnthalpyOfVaporization? dh = null;
+        if (e.Optional("enthalpy_of_vaporization") is { } h) dh = ReadEnthalpy(h, tc, SourceOf);
+
+        var peroxide = PeroxideClass.None;
+        if (e.Optional("peroxide_class") is { } pcls)
+        {
+            pcls.OnlyKeys("value", "source");
+            string v = pcls.Required("value").String();
+            peroxide = v switch
+            {
+                "none" => PeroxideClass.None,
+                "slow" => PeroxideClass.Slow,
+                "on-concentration" => PeroxideClass.OnConcentration,
+                "severe" => PeroxideClass.Severe,
+                _ => throw pcls.Required("value").Error($"'{v}' is not a peroxide class; allowed: none, slow, on-concentration, severe"),
+            };
+            SourceOf(pcls, "peroxide_class");
+        }
+
+        var flags = SolventFlags.None;
+        if (e.Optional("flags") is { } fl)
+        {
+            fl.OnlyKeys("value", "source");
+            foreach (var f in fl.Required("value").Items())
+            {
+                string w = f.String();
+                flags |= w switch
+                {
+                    "bumping-prone" => SolventFlags.BumpingProne,
+                    "toxic-vapor" => SolventFlags.ToxicVapor,
+                    "foaming" => SolventFlags.Foaming,
+                    "hygroscopic" => SolventFlags.Hygroscopic,
+                    _ => throw f.Error($"'{w}' is not a flag; allowed: bumping-prone, toxic-vapor, foaming, hygroscopic"),
+                };
+            }
+            SourceOf(fl, "flags");
+        }
+
+        Dictionary<int, int>? groups = null;
+        if (e.Optional("unifac") is { } u)
+        {
+            u.OnlyKeys("groups", "source");
+            groups = [];
+            foreach (var (key, value) in u.Required("groups").Entries())
+            {
+                if (!int.TryParse(key, out int id) || id <= 0) throw value.Error($"'{key}' is not a UNIFAC subgroup id");
+                double n = value.Positive();
+                if (n != Math.Floor(n)) throw value.Error("a subgroup count must be a whole number");
+                groups[id] = (int)n;
+            }
+            SourceOf(u, "unifac");
+        }
+
+        var aliases = e.Optional("aliases")?.Items().Select(a => a.String()).ToList() ?? [];
+
+        return new Solvent
+        {
+            Name = name,
+            Aliases = aliases,
+            Cas = cas,
+            Formula = e.Optional("formula")?.String(),
+            MolarMassGPerMol = molarMass,
+            LiquidDensityKgPerM3 = double.IsNaN(density) ? null : density,
+            MeltingPointK = tm,
+            NormalBoilingPointK = tb,
+            CriticalTemperatureK = tc,
+            CriticalPressurePa = pc,
+            FlashPointK = flash,
+            AutoignitionK = autoignition,
+            PeroxideClass = peroxide,
+            Flags = flags,
+            UnifacGroups = groups,
+            VaporPressure = new VaporPressureModel(name, curves, tc, pc),
+            EnthalpyOfVaporization = dh,
+            Sources = fieldSources,
+            Origin = $"{e.File}:{e.Line}",
+        };
+    }
+
+    private static IVaporPressureCurve ReadCurve(YamlCursor c, Func<YamlCursor, string, string> sourceOf)
+    {
+        string form = c.Required("form").String();
+        string[] common = ["form", "t_min_k", "t_max_k", "source"];
+        double tmin = c.Required("t_min_k").Positive(), tmax = c.Required("t_max_k").Positive();
+        if (!(tmin < tmax)) throw c.Required("t_max_k").Error($"t_max_k {tmax} must be above t_min_k {tmin}");
+        string source = sourceOf(c, "vapor_pressure");
+        double N(string k) => c.Required(k).Number();
+
+        IVaporPressureCurve curve;
+        switch (form)
+        {
+            case "antoine-log10":
+            case "antoine-ln":
+                c.OnlyKeys([.. common, "a", "b", "c", "p_unit", "t_unit"]);
+                string pUnit = c.Optional("p_unit")?.String() ?? "Pa";
+                string tUnit = c.Optional("t_unit")?.String() ?? "K";
+                double unitPa = pUnit switch
+                {
+                    "Pa" => 1, "kPa" => 1000, "bar" => 1e5, "mbar" => 100, "MPa" => 1e6,
+                    "mmHg" => 133.322387415, "Torr" => 101325.0 / 760.0,
+                    _ => throw c.Required("p_unit").Error($"'{pUnit}' is not a pressure unit; allowed: Pa, kPa, MPa, bar, mbar, mmHg, Torr"),
+                };
+                if (tUnit is not ("K" or "C")) throw c.Required("t_unit").Error($"'{tUnit}' is not allowed; use K or C");
+                curve = new Antoine
+                {
+                    Log10 = form == "antoine-log10", A = N("a"), B = N("b"), C = N("c"),
+                    PressureUnitPa = unitPa, CelsiusScale = tUnit == "C", Source = source, TMinK = tmin, TMaxK = tmax,
+                };
+                break;
+            case "dippr101":
+                c.OnlyKeys([.. common, "c1", "c2", "c3", "c4", "c5"]);
+                curve = new Dippr101 { C1 = N("c1"), C2 = N("c2"), C3 = N("c3"), C4 = N("c4"), C5 = N("c5"), Source = source, TMinK = tmin, TMaxK = tmax };
+                break;
+            case "wagner-3-6":
+            case "wagner-2.5-5":
+                c.OnlyKeys([.. common, "a", "b", "c", "d", "tc_k", "pc_pa"]);
+                curve = new Wagner
+                {
+                    FormName = form, TcK = c.Required("tc_k").Positive(), PcPa = c.Required("pc_pa").Positive(),
+                    Terms = form == "wagner-3-6" ? Wagner.Form36(N("a"), N("b"), N("c"), N("d")) : Wagner.Form255(N("a"), N("b"), N("c"), N("d")),
+                    Source = source, TMinK = tmin, TMaxK = tmax,
+                };
+                break;
+            case "wagner-general":
+                c.OnlyKeys([.. common, "terms", "tc_k", "pc_pa"]);
+                var terms = c.Required("terms").Items().Select(t =>
+                {
+                    var pair = t.Items().ToList();
+                    if (pair.Count != 2) throw t.Error("each term is [coefficient, exponent of tau]");
+                    return (pair[0].Number(), pair[1].Number());
+                }).ToList();
+                curve = new Wagner { FormName = form, TcK = c.Required("tc_k").Positive(), PcPa = c.Required("pc_pa").Positive(), Terms = terms, Source = source, TMinK = tmin, TMaxK = tmax };
+                break;
+            case "clausius-clapeyron":
+                c.OnlyKeys([.. common, "t1_k", "p1_pa", "dhvap_j_per_mol"]);
+                curve = new ClausiusClapeyron
+                {
+                    T1K = c.Required("t1_k").Positive(), P1Pa = c.Required("p1_pa").Positive(),
+                    EnthalpyJPerMol = c.Required("dhvap_j_per_mol").Positive(), Source = source, TMinK = tmin, TMaxK = tmax,
+                };
+                break;
+            default:
+                throw c.Required("form").Error($"'{form}' is not a curve form; allowed: antoine-log10, antoine-ln, dippr101, wagner-3-6, wagner-2.5-5, wagner-general, clausius-clapeyron");
+        }
+
+        // A curve that is not finite, positive and rising over its own range is a copying error in the file.
+        double p1 = curve.PressurePa(tmin), p2 = curve.PressurePa(tmax);
+        if (!(double.IsFinite(p1) && double.IsFinite(p2) && p1 > 0 && p2 > p1))
+            throw c.Required("form").Error($"the curve does not give a rising positive pressure over {tmin}–{tmax} K (check the coefficients)");
+        return curve;
+    }
+
+    private static IEnthalpyOfVaporization ReadEnthalpy(YamlCursor h, double? tc, Func<YamlCursor, string, string> sourceOf)
+    {
+        string form = h.Required("form").String();
+        string source = sourceOf(h, "enthalpy_of_vaporization");
+        switch (form)
+        {
+            case "dippr106":
+                h.OnlyKeys("form", "tc_k", "c1", "c2", "c3", "c4", "t_min_k", "t_max_k", "source");
+                return new Dippr106
+                {
+                    TcK = h.Required("tc_k").Positive(), C1 = h.Required("c1").Positive(), C2 = h.Required("c2").Number(),
+                    C3 = h.Optional("c3")?.Number() ?? 0, C4 = h.Optional("c4")?.Number() ?? 0, Source = source,
+                };
+            case "value":
+                h.OnlyKeys("form", "value_j_per_mol", "at_k", "source");
+                return new WatsonEnthalpy { ValueJPerMol = h.Required("value_j_per_mol").Positive(), AtK = h.Required("at_k").Positive(), TcK = tc, Source = source };
+            default:
+                throw h.Required("form").Error($"'{form}' is not an enthalpy form; allowed: dippr106, value");
+        }
+    }
+}

@@ -1,0 +1,95 @@
+using System.Globalization;
+using System.Text.RegularExpressions;
+using DistillPlan.Core.Library;
+
+namespace DistillPlan.Core.Planning;
+
+/// <summary>
+/// Reads a charge as people write it (DESIGN §5): <c>NAME[=AMOUNT[UNIT]]</c> items joined by
+/// commas, e.g. <c>ethyl-acetate</c>, <c>ethanol=30,water=70</c>, <c>thf=12L,toluene=3L</c>,
+/// <c>ethanol=90%,water=10%</c>. Bare numbers are parts on the chosen basis and are
+/// normalised; percentages must add to 100; absolute amounts (mL, L, g, kg, mol …) are
+/// converted with the library's density and molar mass.
+/// </summary>
+public static partial class ChargeParser
+{
+    [GeneratedRegex(@"^(?<num>[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(?<unit>[a-zA-Zµ%]*)$")]
+    private static partial Regex Amount();
+
+    /// <summary>Allowed amount units, for messages.</summary>
+    public const string AllowedUnits = "a number of parts, a percentage (10%), a volume (uL, mL, L, m3), a mass (mg, g, kg) or an amount (mmol, mol, kmol)";
+
+    /// <summary>Parses a charge; throws <see cref="InputException"/> with the field and value on bad input.</summary>
+    public static Charge Parse(string text, Basis basis, SolventLibrary library, string field = "charge")
+    {
+        if (string.IsNullOrWhiteSpace(text)) throw new InputException(field, text ?? "", "at least one solvent name, e.g. ethyl-acetate or ethanol=30,water=70");
+        var items = text.Split(',', StringSplitOptions.TrimEntries);
+        var parsed = new List<(Solvent Solvent, double Raw, double Moles, string Kind)>();   // kind: parts | percent | mol
+        foreach (string item in items)
+        {
+            if (item.Length == 0) throw new InputException(field, text, "items separated by single commas, e.g. ethanol=30,water=70");
+            string[] kv = item.Split('=', 2, StringSplitOptions.TrimEntries);
+            var solvent = library.Find(kv[0]);
+            if (parsed.Any(p => ReferenceEquals(p.Solvent, solvent)))
+                throw new InputException(field, item, $"each solvent once; {solvent.Name} is given twice");
+            if (kv.Length == 1) { parsed.Add((solvent, double.NaN, double.NaN, "none")); continue; }
+            parsed.Add(ReadAmount(solvent, kv[1], basis, $"{field} ({kv[0]})"));
+        }
+
+        if (parsed.Any(p => p.Kind == "none"))
+        {
+            if (parsed.Count > 1)
+                throw new InputException(field, text, "an amount for every solvent of a mixture, e.g. ethanol=30,water=70");
+            return Charge.Pure(parsed[0].Solvent);
+        }
+
+        var kinds = parsed.Select(p => p.Kind).Distinct().ToList();
+        if (kinds.Count > 1 && (kinds.Contains("parts") || kinds.Contains("percent")))
+            throw new InputException(field, text, "all amounts as parts, all as percentages, or all with units (mL, g, mol …); do not mix them");
+        if (kinds[0] == "percent")
+        {
+            double sum = parsed.Sum(p => p.Raw);
+            if (Math.Abs(sum - 100) > 0.01)
+                throw new InputException(field, text, $"percentages that add to 100 (these add to {sum.ToString("0.##", CultureInfo.InvariantCulture)})");
+        }
+
+        bool relative = kinds[0] != "mol";
+        double total = parsed.Sum(p => p.Moles);
+        var components = parsed.Select(p => new ChargeComponent(p.Solvent, relative ? p.Moles / total : p.Moles)).ToList();
+        return new Charge { Components = components, IsRelative = relative };
+    }
+
+    /// <summary>One amount converted to mol (absolute) or to relative moles (parts, percent).</summary>
+    private static (Solvent, double, double, string) ReadAmount(Solvent s, string text, Basis basis, string field)
+    {
+        var m = Amount().Match(text);
+        if (!m.Success || !double.TryParse(m.Groups["num"].Value, NumberStyles.Float, CultureInfo.InvariantCulture, out double n))
+            throw new InputException(field, text, AllowedUnits);
+        if (!(n > 0)) throw new InputException(field, text, "an amount above zero");
+        string unit = m.Groups["unit"].Value;
+
+        double? volumeM3 = unit switch { "uL" or "µL" => n * 1e-9, "mL" or "ml" => n * 1e-6, "L" or "l" => n * 1e-3, "m3" => n, _ => null };
+        double? massG = unit switch { "mg" => n * 1e-3, "g" => n, "kg" => n * 1e3, _ => null };
+        double? mol = unit switch { "mmol" => n * 1e-3, "mol" => n, "kmol" => n * 1e3, _ => null };
+
+        if (volumeM3 is double v) return (s, n, v / RequireMolarVolume(s, field, text), "mol");
+        if (massG is double g) return (s, n, g / s.MolarMassGPerMol, "mol");
+        if (mol is double x) return (s, n, x, "mol");
+        if (unit is "" or "%")
+        {
+            // Parts or percent on the basis, turned into relative moles.
+            double moles = basis switch
+            {
+                Basis.Mole => n,
+                Basis.Mass => n / s.MolarMassGPerMol,
+                _ => n / RequireMolarVolume(s, field, text),
+            };
+            // The raw number is kept for the 100 % check.
+            return (s, n, moles, unit == "%" ? "percent" : "parts");
+        }
+        throw new InputException(field, text, AllowedUnits);
+    }
+
+    private static double RequireMolarVolume(Solvent s, string field, string text) =>
+        s.MolarVolumeM3PerMol ?? throw new InputException(field, text, $"a mass or mole amount: the library has no density for {s.Name}");
+}

@@ -1,0 +1,87 @@
+using DistillPlan.Core.Quantities;
+
+namespace DistillPlan.Core.Planning;
+
+/// <summary>Kinds of vacuum source, each with its usual limit.</summary>
+public enum PumpKind
+{
+    /// <summary>Chemistry diaphragm pump (dry; usual ultimate 2–10 mbar, common practice).</summary>
+    Diaphragm,
+    /// <summary>Oil-sealed rotary-vane pump (far below 1 mbar; needs a cold trap, common practice).</summary>
+    RotaryVane,
+    /// <summary>Water aspirator: cannot go below the vapour pressure of its water.</summary>
+    Aspirator,
+    /// <summary>Liquid-ring pump: limited by the vapour pressure of its seal liquid.</summary>
+    LiquidRing,
+}
+
+/// <summary>Kinds of heating medium, each with its usual upper limit.</summary>
+public enum HeatingMedium
+{
+    /// <summary>Water bath (usual limit 95 °C, common practice).</summary>
+    WaterBath,
+    /// <summary>Oil bath (usual limit 180 °C for silicone oil, common practice).</summary>
+    OilBath,
+    /// <summary>Jacketed vessel with a thermal fluid or steam; the limit is site-specific.</summary>
+    Jacket,
+}
+
+/// <summary>
+/// The equipment a plan runs on. Every value has a default marked as such, so a plan can
+/// list what it assumed.
+/// </summary>
+public sealed record Equipment
+{
+    /// <summary>Coolant temperature at the condenser coil.</summary>
+    public Temperature Coolant { get; init; } = Temperature.FromCelsius(10);
+    /// <summary>Vacuum source.</summary>
+    public PumpKind Pump { get; init; } = PumpKind.Diaphragm;
+    /// <summary>The pump's ultimate (lowest reachable) pressure.</summary>
+    public Pressure PumpUltimate { get; init; } = Pressure.FromMillibar(5);
+    /// <summary>Heating medium.</summary>
+    public HeatingMedium Heating { get; init; } = HeatingMedium.WaterBath;
+    /// <summary>Highest temperature the heating medium may be set to.</summary>
+    public Temperature HeatingMax { get; init; } = Temperature.FromCelsius(95);
+    /// <summary>Local atmospheric pressure.</summary>
+    public Pressure Atmosphere { get; init; } = Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
+    /// <summary>Room temperature at the pump exhaust, for the flash-point check.</summary>
+    public Temperature Ambient { get; init; } = Temperature.FromCelsius(20);
+
+    /// <summary>Names of the fields the user set; the rest are defaults.</summary>
+    public IReadOnlySet<string> UserSet { get; init; } = new HashSet<string>();
+
+    /// <summary>Usual ultimate pressure of a pump kind (common practice).</summary>
+    public static Pressure TypicalUltimate(PumpKind kind) => kind switch
+    {
+        PumpKind.Diaphragm => Pressure.FromMillibar(5),
+        PumpKind.RotaryVane => Pressure.FromMillibar(0.05),
+        PumpKind.Aspirator => Pressure.FromMillibar(25),    // about Psat of water at 21 °C, plus a little
+        PumpKind.LiquidRing => Pressure.FromMillibar(35),   // water seal at about 25 °C
+        _ => Pressure.FromMillibar(5),
+    };
+
+    /// <summary>Usual upper limit of a heating medium (common practice).</summary>
+    public static Temperature TypicalLimit(HeatingMedium medium) => medium switch
+    {
+        HeatingMedium.WaterBath => Temperature.FromCelsius(95),
+        HeatingMedium.OilBath => Temperature.FromCelsius(180),
+        _ => Temperature.FromCelsius(150),
+    };
+}
+
+/// <summary>The ΔT rule and the preferences a plan follows (common practice, often taught as 20/40/60).</summary>
+public sealed record Rules
+{
+    /// <summary>Preferred vapour (boiling) temperature.</summary>
+    public Temperature PreferredVapor { get; init; } = Temperature.FromCelsius(40);
+    /// <summary>Step from vapour down to condenser.</summary>
+    public TemperatureDifference VaporToCondenser { get; init; } = new(20);
+    /// <summary>Step from bath up to vapour.</summary>
+    public TemperatureDifference BathToVapor { get; init; } = new(20);
+    /// <summary>The setpoint must be at least this many times the pump's ultimate pressure, so the pump can hold it (common practice).</summary>
+    public double PumpMarginFactor { get; init; } = 2.0;
+    /// <summary>Highest temperature the product may see (the bath is kept at or below it).</summary>
+    public Temperature? ProductMax { get; init; }
+    /// <summary>Names of the fields the user set; the rest are defaults.</summary>
+    public IReadOnlySet<string> UserSet { get; init; } = new HashSet<string>();
+}

@@ -45,6 +45,10 @@ public sealed record EquilibriumPoint
     /// <summary>Relative volatility of each pair of volatile components, in component order.</summary>
     public required IReadOnlyList<RelativeVolatility> RelativeVolatilities { get; init; }
 
+    /// <summary>Components whose vapour pressure at this temperature is extrapolated beyond
+    /// the validity range of their curve (empty when none, or when the curves cannot tell).</summary>
+    public IReadOnlyList<string> ExtrapolatedComponents { get; init; } = [];
+
     /// <summary>Activity model used ("unifac" or "ideal").</summary>
     public required string Model { get; init; }
 

@@ -1,3 +1,5 @@
+using DistillPlan.Core.Library;
+
 namespace DistillPlan.Core.Mixtures;
 
 /// <summary>
@@ -8,6 +10,13 @@ namespace DistillPlan.Core.Mixtures;
 public delegate double SaturationPressureFunction(double temperatureK);
 
 /// <summary>
+/// Whether a vapour-pressure function is extrapolating (outside the validity range of its
+/// curve) at a temperature.
+/// </summary>
+/// <param name="temperatureK">Temperature [K].</param>
+public delegate bool ExtrapolationCheck(double temperatureK);
+
+/// <summary>
 /// One component of a liquid mixture as the phase-equilibrium code needs it: a name, a molar
 /// mass, a pure-component vapour-pressure function and, optionally, UNIFAC subgroup counts
 /// and a liquid density. A non-volatile component (the product) has no vapour pressure: it
@@ -15,11 +24,12 @@ public delegate double SaturationPressureFunction(double temperatureK);
 /// </summary>
 /// <remarks>
 /// The vapour pressure is a delegate so that the mixture code does not depend on how pure
-/// components are described.
+/// components are described; <see cref="FromSolvent"/> adapts a library entry.
 /// </remarks>
 public sealed class MixtureComponent
 {
     private readonly SaturationPressureFunction? _saturationPressure;
+    private readonly ExtrapolationCheck? _isExtrapolated;
 
     /// <summary>Creates a volatile component.</summary>
     /// <param name="name">Display name; unique within a mixture.</param>
@@ -28,16 +38,34 @@ public sealed class MixtureComponent
     /// <param name="unifacSubgroups">UNIFAC (original) subgroup id → count, or null when unknown.</param>
     /// <param name="liquidDensityKgPerM3">Liquid density [kg/m³] near room temperature, or null;
     /// needed only for volume-based strip end conditions.</param>
+    /// <param name="isExtrapolated">Tells when <paramref name="saturationPressure"/> extrapolates,
+    /// or null when it cannot tell.</param>
     public MixtureComponent(
         string name,
         double molarMassGPerMol,
         SaturationPressureFunction saturationPressure,
         IReadOnlyDictionary<int, int>? unifacSubgroups = null,
-        double? liquidDensityKgPerM3 = null)
+        double? liquidDensityKgPerM3 = null,
+        ExtrapolationCheck? isExtrapolated = null)
         : this(name, molarMassGPerMol, unifacSubgroups, liquidDensityKgPerM3)
     {
         ArgumentNullException.ThrowIfNull(saturationPressure);
         _saturationPressure = saturationPressure;
+        _isExtrapolated = isExtrapolated;
+    }
+
+    /// <summary>
+    /// Adapts a library solvent: its ranked vapour-pressure model (extrapolation flagged, refusal
+    /// above Tc kept), UNIFAC groups, molar mass and density.
+    /// </summary>
+    /// <param name="solvent">A solvent from the library.</param>
+    public static MixtureComponent FromSolvent(Solvent solvent)
+    {
+        ArgumentNullException.ThrowIfNull(solvent);
+        var curves = solvent.VaporPressure;
+        return new MixtureComponent(solvent.Name, solvent.MolarMassGPerMol,
+            t => curves.SaturationPressure(t).PressurePa, solvent.UnifacGroups, solvent.LiquidDensityKgPerM3,
+            t => curves.SaturationPressure(t).Extrapolated);
     }
 
     private MixtureComponent(
@@ -107,6 +135,12 @@ public sealed class MixtureComponent
     /// <param name="temperatureK">Temperature [K].</param>
     public double SaturationPressurePa(double temperatureK)
         => _saturationPressure is null ? 0.0 : _saturationPressure(temperatureK);
+
+    /// <summary>True when the vapour pressure at <paramref name="temperatureK"/> is an
+    /// extrapolation of its curve (false when unknown or non-volatile).</summary>
+    /// <param name="temperatureK">Temperature [K].</param>
+    public bool IsSaturationPressureExtrapolated(double temperatureK)
+        => _isExtrapolated is not null && _isExtrapolated(temperatureK);
 
     /// <inheritdoc />
     public override string ToString() => Name;

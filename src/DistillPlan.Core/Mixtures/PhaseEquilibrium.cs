@@ -270,27 +270,31 @@ public sealed class PhaseEquilibrium
     }
 
     /// <summary>Brackets the root of an increasing residual r(T) by stepping outward from the
-    /// guess (steps doubling from 2 K), then refines it with Brent.</summary>
+    /// guess (steps doubling from 2 K), then refines it with Brent. A step that lands where a
+    /// vapour-pressure curve refuses (above a critical temperature) is shortened instead.</summary>
     private static double SolveTemperature(Func<double, double> residual, string method, double pressurePa,
         double toleranceK, int maxIterations, double guessK)
     {
         double lo = Math.Clamp(guessK, SearchMinimumK, SearchMaximumK);
-        double rLo = residual(lo);
-        if (double.IsNaN(rLo))
-            throw new EquilibriumConvergenceException(method, lo, pressurePa, "vapour pressure is not a number here");
+        double rLo = Evaluate(residual, lo, method, pressurePa)
+            ?? throw new EquilibriumConvergenceException(method, lo, pressurePa, "no vapour pressure at the starting temperature");
         double direction = rLo < 0 ? 1.0 : -1.0; // below the root the mixture's pressure is too low
         double step = 2.0, hi = lo, rHi = rLo;
         while (Math.Sign(rHi) == Math.Sign(rLo) && rHi != 0)
         {
-            lo = hi;
-            rLo = rHi;
-            hi = Math.Clamp(lo + direction * step, SearchMinimumK, SearchMaximumK);
-            if (hi == lo)
-                throw new EquilibriumConvergenceException(method, lo, pressurePa,
+            double next = Math.Clamp(hi + direction * step, SearchMinimumK, SearchMaximumK);
+            if (next == hi)
+                throw new EquilibriumConvergenceException(method, hi, pressurePa,
                     $"no root between {SearchMinimumK} K and {SearchMaximumK} K");
-            rHi = residual(hi);
-            if (double.IsNaN(rHi))
-                throw new EquilibriumConvergenceException(method, hi, pressurePa, "vapour pressure is not a number here");
+            if (Evaluate(residual, next, method, pressurePa) is not { } rNext)
+            {
+                step /= 4; // refused there: approach the edge more carefully
+                if (step < 1e-3)
+                    throw new EquilibriumConvergenceException(method, next, pressurePa,
+                        "the root lies beyond where a component's vapour pressure is defined");
+                continue;
+            }
+            (lo, rLo, hi, rHi) = (hi, rHi, next, rNext);
             step *= 2;
         }
         if (rHi == 0) return hi;
@@ -299,6 +303,24 @@ public sealed class PhaseEquilibrium
             throw new EquilibriumConvergenceException(method, 0.5 * (lower + upper), pressurePa,
                 $"Brent's method did not reach {toleranceK} K in {maxIterations} iterations between {lower:0.###} and {upper:0.###} K");
         return root;
+    }
+
+    /// <summary>The residual at T, or null where a curve refuses (out of range) or gives no number.</summary>
+    private static double? Evaluate(Func<double, double> residual, double temperatureK, string method, double pressurePa)
+    {
+        try
+        {
+            double r = residual(temperatureK);
+            return double.IsNaN(r) ? null : r;
+        }
+        catch (OutOfRangeException)
+        {
+            return null;
+        }
+        catch (EquilibriumConvergenceException error) when (error.Method != method)
+        {
+            return null; // an inner solve (dew liquid) failed at this trial temperature
+        }
     }
 
     /// <summary>A guess that keeps the bracket search short: the temperature at which the
@@ -331,6 +353,8 @@ public sealed class PhaseEquilibrium
             ActivityCoefficients = ByName(names, gamma),
             KValues = ByName(names, k),
             RelativeVolatilities = alphas,
+            ExtrapolatedComponents = _components
+                .Where(c => !c.IsNonVolatile && c.IsSaturationPressureExtrapolated(t)).Select(c => c.Name).ToList(),
             Model = Model.Name,
             FallbackReason = Model.FallbackReason,
             X = x,

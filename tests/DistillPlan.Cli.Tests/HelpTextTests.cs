@@ -7,6 +7,9 @@ public class HelpTextTests
     [InlineData("setpoints")]
     [InlineData("curve")]
     [InlineData("solvents")]
+    [InlineData("mixture")]
+    [InlineData("azeotrope")]
+    [InlineData("strip")]
     public void Help_text_matches_the_checked_in_copy(string verb)
     {
         var r = CliRunner.Run(verb, "--help");

@@ -29,12 +29,11 @@ public static class CliApp
         root.Subcommands.Add(SetpointsCommand.Build());
         root.Subcommands.Add(CurveCommand.Build());
         root.Subcommands.Add(SolventsCommand.Build());
-        foreach (var extra in ExtraCommands) root.Subcommands.Add(extra());
+        root.Subcommands.Add(MixtureCommand.Build());
+        root.Subcommands.Add(AzeotropeCommand.Build());
+        root.Subcommands.Add(StripCommand.Build());
         return root;
     }
-
-    /// <summary>Further verbs registered by other parts of the program (mixtures).</summary>
-    internal static List<Func<Command>> ExtraCommands { get; } = [];
 
     /// <summary>Runs the program with arguments, writing to the given streams.</summary>
     public static int Run(string[] args, TextWriter output, TextWriter error)

@@ -15,7 +15,9 @@ namespace DistillPlan.Core.Checks;
 /// <param name="StartVapor">Vapour mole fractions at the setpoint.</param>
 /// <param name="Extrapolated">True when a curve was used outside its range.</param>
 /// <param name="Conflicts">Limits that could not all be met.</param>
+/// <param name="Azeotropes">Azeotropes of the charge's pairs at the setpoint pressure.</param>
 public sealed record CheckContext(
     Charge Charge, IBoilingSystem System, Equipment Equipment, Rules Rules,
     Temperature Vapor, Temperature Bath, Pressure Setpoint, Temperature CondenserMax,
-    double[] StartVapor, bool Extrapolated, IReadOnlyList<Conflict> Conflicts);
+    double[] StartVapor, bool Extrapolated, IReadOnlyList<Conflict> Conflicts,
+    IReadOnlyList<Mixtures.Azeotrope> Azeotropes);

@@ -33,6 +33,7 @@ public static class PlanChecks
         Add(found, BathLimit(c));
         Add(found, ProductLimit(c));
         Add(found, ExtrapolatedCurve(c));
+        foreach (var a in c.Azeotropes) Add(found, AzeotropeCheck(a, c));
         return found.OrderByDescending(f => f.Severity).ToList();
     }
 
@@ -117,7 +118,7 @@ public static class PlanChecks
         const string action = "Flask at most half full, rotation on before vacuum, lower the pressure in the approach steps shown, use a bump trap.";
         if (prone.Count > 0)
             return new("bumping-risk", Severity.Warning,
-                $"{string.Join(", ", prone)} tends to bump; the bath is {superheat:0} K above the boiling point at the setpoint.", action, values);
+                $"{string.Join(" and ", prone)} {(prone.Count == 1 ? "tends" : "tend")} to bump; the bath is {superheat:0} K above the boiling point at the setpoint.", action, values);
         if (superheat > 30)
             return new("bumping-risk", Severity.Caution,
                 $"The bath is {superheat:0} K above the boiling point at the setpoint; superheated liquid can bump.", action, values);
@@ -185,6 +186,38 @@ public static class PlanChecks
             return new(code, Severity.Info, $"The bath is held at {what} ({limit}); the vapour temperature was lowered to {c.Vapor}.",
                 "Nothing to change; a deeper vacuum does the work instead of heat.", values);
         return null;
+    }
+
+    /// <summary>
+    /// azeotrope: a pair of the charge forms an azeotrope at the setpoint pressure; evaporation
+    /// cannot take the composition past it.
+    /// </summary>
+    public static Check AzeotropeCheck(Mixtures.Azeotrope a, CheckContext c)
+    {
+        var names = a.MoleFractions.Keys.ToList();
+        string first = names[0], second = names[1];
+        double xAz = a.MoleFractions[first];
+        var fractions = c.Charge.Components.Zip(c.Charge.MoleFractions()).ToDictionary(t => t.First.Solvent.Name, t => t.Second);
+        double xFirst = fractions[first] / (fractions[first] + fractions[second]);
+        var t = Temperature.FromKelvin(a.TemperatureK);
+        string where = $"{xAz:0.###} mole fraction {first} ({t} at {a.PressurePa / 100:0.#} mbar)";
+        var values = V(("azeotrope_mole_fraction", xAz), ("charge_mole_fraction", xFirst), ("temperature_c", t.Celsius), ("pressure_mbar", a.PressurePa / 100));
+        bool predicted = c.System.Model == "unifac";
+        string basis = predicted ? " (predicted by UNIFAC)" : "";
+        if (a.Kind == Mixtures.AzeotropeKind.MinimumBoiling)
+        {
+            // Gibbs–Konovalov: the vapour lies between the liquid and the azeotrope, so the residue moves away from it.
+            string side = xFirst > xAz ? first : second, other = side == first ? second : first;
+            return new("azeotrope", Severity.Warning,
+                $"{first} and {second} form a minimum-boiling azeotrope at {where}{basis}; evaporation cannot take the composition past it.",
+                $"The distillate comes over near the azeotrope and the residue moves towards pure {side}. Evaporation alone cannot free {other} of {side}: use a drying agent, an entrainer or a solvent swap.",
+                values);
+        }
+        string excess = xFirst > xAz ? first : second;
+        return new("azeotrope", Severity.Warning,
+            $"{first} and {second} form a maximum-boiling azeotrope at {where}{basis}; evaporation cannot take the composition past it.",
+            $"The excess {excess} distils first; the residue moves towards the azeotrope and then boils unchanged at its higher temperature. Evaporation alone cannot remove the rest.",
+            values);
     }
 
     /// <summary>extrapolated-curve: a vapour pressure was taken outside the fitted range of its curve.</summary>

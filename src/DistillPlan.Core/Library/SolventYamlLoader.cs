@@ -264,7 +264,7 @@ public static class SolventYamlLoader
                 throw c.Required("form").Error($"'{form}' is not a curve form; allowed: antoine-log10, antoine-ln, dippr101, wagner-3-6, wagner-2.5-5, wagner-general, clausius-clapeyron");
         }
 
-        // A curve that is not finite, positive and rising over its own range is a transcription error.
+        // A curve that is not finite, positive and rising over its own range is a copying error in the file.
         double p1 = curve.PressurePa(tmin), p2 = curve.PressurePa(tmax);
         if (!(double.IsFinite(p1) && double.IsFinite(p2) && p1 > 0 && p2 > p1))
             throw c.Required("form").Error($"the curve does not give a rising positive pressure over {tmin}–{tmax} K (check the coefficients)");

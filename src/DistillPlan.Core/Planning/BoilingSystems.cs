@@ -1,3 +1,5 @@
+using DistillPlan.Core.Mixtures;
+
 namespace DistillPlan.Core.Planning;
 
 /// <summary>Chooses the equilibrium model for a charge.</summary>
@@ -5,17 +7,21 @@ public static class BoilingSystems
 {
     /// <summary>
     /// A pure solvent boils at its saturation point; a mixture uses modified Raoult's law with
-    /// the requested activity model ("unifac" or "ideal"; default unifac where parameters exist).
+    /// the requested activity model ("unifac" or "ideal"; default unifac where parameters exist,
+    /// ideal with the reason otherwise).
     /// </summary>
     public static IBoilingSystem For(Charge charge, string? model)
     {
-        if (model is not (null or "unifac" or "ideal"))
-            throw new InputException("--model", model, "unifac or ideal");
+        var kind = ParseModel(model);
         if (charge.IsPure) return new PureSolventSystem(charge.Components[0].Solvent);
-        return MixtureFactory?.Invoke(charge, model)
-               ?? throw new InputException("charge", charge.Describe(), "a single solvent in this build");
+        return new MixtureBoilingSystem(charge.Components.Select(c => c.Solvent).ToList(), kind);
     }
 
-    /// <summary>Set by the mixture engine at start-up.</summary>
-    public static Func<Charge, string?, IBoilingSystem>? MixtureFactory { get; set; }
+    /// <summary>The activity model a user named: unifac (default) or ideal.</summary>
+    public static ActivityModelKind ParseModel(string? model) => model?.ToLowerInvariant() switch
+    {
+        null or "" or "unifac" => ActivityModelKind.Unifac,
+        "ideal" => ActivityModelKind.Ideal,
+        _ => throw new InputException("--model", model, "unifac or ideal"),
+    };
 }

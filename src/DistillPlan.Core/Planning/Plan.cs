@@ -49,6 +49,8 @@ public sealed record Plan
     public required IReadOnlyList<Assumption> Assumptions { get; init; }
     /// <summary>Notes on the result (mixture ramp, model fallback …).</summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
+    /// <summary>For a mixture: the pressure ramp at the vapour temperature as the light component leaves.</summary>
+    public Mixtures.StripResult? Ramp { get; init; }
     /// <summary>The equipment planned on.</summary>
     public required Equipment Equipment { get; init; }
     /// <summary>The rules applied.</summary>

@@ -59,12 +59,22 @@ public static class SetpointPlanner
         var bath = vapor + rules.BathToVapor;
         var condenserMax = vapor - rules.VaporToCondenser;
 
+        var mixture = system as MixtureBoilingSystem;
+        var azeotropes = mixture?.Azeotropes(setpoint.Pascal) ?? [];
         var context = new CheckContext(charge, system, equipment, rules, vapor, bath, setpoint, condenserMax, bubble.Vapor,
-            bubble.Extrapolated || atmosphericBoil.Extrapolated, conflicts);
+            bubble.Extrapolated || atmosphericBoil.Extrapolated, conflicts, azeotropes);
         var checks = PlanChecks.Evaluate(context);
 
         var notes = new List<string>();
         if (system.ModelNote is string note) notes.Add(note);
+        var ramp = mixture is null || atmospheric ? null : StripPlanner.RampAtVaporTemperature(mixture, charge, vapor, equipment, rules);
+        if (ramp is { Steps.Count: > 1 })
+        {
+            var end = ramp.Steps[^1];
+            string heavy = end.Liquid.MaxBy(kv => kv.Value).Key;
+            notes.Add($"Hold the vapour at {vapor}: the pressure must fall from {setpoint} to {Pressure.FromPascal(end.PressurePa)} " +
+                      $"as the light component leaves ({ramp.EndMessage}); the residue is then {100 * end.Liquid[heavy]:0} mol% {heavy}.");
+        }
         if (atmospheric)
             notes.Add($"The charge boils at {tbAtm} at the local atmospheric pressure ({equipment.Atmosphere}), " +
                       "at or below the preferred vapour temperature: no vacuum is needed; use a mild bath.");
@@ -86,6 +96,7 @@ public static class SetpointPlanner
             Checks = checks,
             Assumptions = Assumptions(charge, equipment, rules),
             Notes = notes,
+            Ramp = ramp,
             Equipment = equipment,
             Rules = rules,
         };

@@ -7,8 +7,8 @@ namespace DistillPlan.Core.VaporPressure;
 /// (Pa, kPa, bar, mmHg …) and t_unit is K or °C; both are part of the entry.
 /// Valid over the authors' fitted range only; it diverges near T = −C.
 /// Source of the form: Antoine, C. R. Acad. Sci. 107 (1888) 681.
-/// Example (Poling 2001, App. A, ethyl acetate: A 9.5314, B 1244.95, C −55.84, Pa, K):
-/// P(350.25 K) = 101.0 kPa.
+/// Example (Poling 2001, App. A, ethyl acetate: A 9.13361, B 1195.13, C −60.68, Pa, K):
+/// P(350.25 K) = 10^(9.13361 − 1195.13/289.57) = 101.47 kPa.
 /// </summary>
 public sealed class Antoine : IVaporPressureCurve
 {

@@ -6,8 +6,8 @@ namespace DistillPlan.Core.VaporPressure;
 /// Good for a short distance from the known point (ΔHvap falls with T, so far away it
 /// over-predicts P at high T). With Trouton's rule it estimates the curve of a compound known
 /// by its normal boiling point alone.
-/// Example: ethanol, T1 = 351.39 K, P1 = 101325 Pa, ΔHvap = 38.6 kJ/mol gives P(313.15 K) ≈ 18.5 kPa
-/// (measured about 17.9 kPa: the estimate is a few per cent high).
+/// Example: ethanol, T1 = 351.39 K, P1 = 101325 Pa, ΔHvap = 38.6 kJ/mol gives P(313.15 K) = 20.19 kPa;
+/// measured is about 17.9 kPa: the estimate is some 13 % high because ΔHvap grows as T falls.
 /// </summary>
 public sealed class ClausiusClapeyron : IVaporPressureCurve
 {

@@ -13,7 +13,7 @@ public interface IEnthalpyOfVaporization
 /// DIPPR equation 106, ΔHvap/(J/mol) = C1·(1 − Tr)^(C2 + C3·Tr + C4·Tr²), Tr = T/Tc.
 /// C1 [J/mol], C2..C4 [-], Tc [K]. Zero at and above Tc. Coefficients as in Perry's Chemical
 /// Engineers' Handbook, 8th ed., Table 2-150.
-/// Example (Perry 2-150, ethanol: Tc 514, C1 55789, C2 0.31245): ΔHvap(351.4 K) ≈ 38.5 kJ/mol.
+/// Example (Perry 2-150, ethanol: Tc 514, C1 55789, C2 0.31245): ΔHvap(351.4 K) = 38.94 kJ/mol.
 /// </summary>
 public sealed class Dippr106 : IEnthalpyOfVaporization
 {

@@ -1,0 +1,146 @@
+using System.CommandLine;
+using DistillPlan.Cli.Output;
+using DistillPlan.Core;
+using DistillPlan.Core.Library;
+using DistillPlan.Core.Mixtures;
+using DistillPlan.Core.Planning;
+using DistillPlan.Core.Quantities;
+
+namespace DistillPlan.Cli.Commands;
+
+/// <summary><c>distillplan mixture CHARGE --at P</c> (or <c>--temp T</c>): bubble and dew points, compositions, γ, α.</summary>
+internal static class MixtureCommand
+{
+    public static Command Build()
+    {
+        var common = new CommonOptions();
+        var charge = new Argument<string>("charge") { Description = "Components with amounts: benzene=50,toluene=50 (see --basis)." };
+        var at = new Option<string?>("--at") { Description = "Pressure for bubble and dew temperatures (default 1013.25 mbar)." };
+        var temp = new Option<string?>("--temp") { Description = "Temperature for bubble and dew pressures, instead of --at." };
+        var model = ModelOption();
+        var cmd = new Command("mixture", "Bubble and dew points of a mixture, vapour composition, activity coefficients and relative volatility.");
+        cmd.Arguments.Add(charge);
+        cmd.Options.Add(at);
+        cmd.Options.Add(temp);
+        cmd.Options.Add(model);
+        cmd.Options.Add(common.Basis);
+        common.AddOutput(cmd);
+        cmd.SetAction(r =>
+        {
+            var library = common.LoadLibrary(r);
+            var unit = common.DisplayUnit(r);
+            var c = ChargeParser.Parse(r.GetValue(charge)!, common.ParseBasis(r), library);
+            var system = Mixture(c, r.GetValue(model));
+            double[] x = c.MoleFractions();
+            EquilibriumPoint bubble, dew;
+            if (r.GetValue(temp) is string tt)
+            {
+                if (r.GetValue(at) is string a) throw new InputException("--at", a, "either --at or --temp, not both");
+                var t = TemperatureUnits.Parse(tt, "--temp");
+                bubble = system.Equilibrium.BubblePressure(t.Kelvin, x);
+                dew = system.Equilibrium.DewPressure(t.Kelvin, x);
+            }
+            else
+            {
+                var p = r.GetValue(at) is string a ? PressureUnits.Parse(a, "--at", Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa)) : Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
+                bubble = system.Equilibrium.BubbleTemperature(p.Pascal, x);
+                dew = system.Equilibrium.DewTemperature(p.Pascal, x);
+            }
+            var o = r.InvocationConfiguration.Output;
+            static Dictionary<string, double> F(IReadOnlyDictionary<string, double> d) => d.ToDictionary(kv => kv.Key, kv => Json.R(kv.Value, 5));
+            if (r.GetValue(common.Json))
+            {
+                Json.Write(o, new
+                {
+                    bubble_temperature_c = Json.R(bubble.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
+                    dew_temperature_c = Json.R(dew.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
+                    bubble_pressure_mbar = Json.R(bubble.PressurePa / 100, 3),
+                    dew_pressure_mbar = Json.R(dew.PressurePa / 100, 3),
+                    model = bubble.Model,
+                    model_note = system.ModelNote,
+                    liquid = F(bubble.Liquid),
+                    vapor = F(bubble.Vapor),
+                    dew_liquid = F(dew.Liquid),
+                    activity_coefficients = F(bubble.ActivityCoefficients),
+                    relative_volatility = bubble.RelativeVolatilities.Select(a => new { first = a.First, second = a.Second, alpha = Json.R(a.Alpha, 4) }).ToList(),
+                    extrapolated = bubble.ExtrapolatedComponents,
+                });
+                return CliApp.Ok;
+            }
+            o.WriteLine($"{c.Describe()}  [model: {bubble.Model}]");
+            if (system.ModelNote is string n) o.WriteLine($"  Note: {n}");
+            o.WriteLine($"  Bubble point  {Temperature.FromKelvin(bubble.TemperatureK)} at {PressureUnits.Format(Pressure.FromPascal(bubble.PressurePa), unit)}");
+            o.WriteLine($"  Dew point     {Temperature.FromKelvin(dew.TemperatureK)} at {PressureUnits.Format(Pressure.FromPascal(dew.PressurePa), unit)}");
+            o.WriteLine($"  {"component",-24} {"liquid x",9} {"vapour y",9} {"γ",7}");
+            foreach (var s in system.Components)
+                o.WriteLine($"  {s.Name,-24} {bubble.Liquid[s.Name],9:0.0000} {bubble.Vapor[s.Name],9:0.0000} {bubble.ActivityCoefficients[s.Name],7:0.000}");
+            foreach (var a in bubble.RelativeVolatilities) o.WriteLine($"  α({a.First}/{a.Second}) = {a.Alpha:0.###}");
+            return CliApp.Ok;
+        });
+        return cmd;
+    }
+
+    internal static Option<string?> ModelOption() => new("--model") { Description = "Activity model: unifac (default where parameters exist; falls back to ideal and says why) or ideal." };
+
+    internal static MixtureBoilingSystem Mixture(Charge c, string? model)
+    {
+        if (c.IsPure) throw new InputException("charge", c.Describe(), "two or more components, e.g. benzene=50,toluene=50");
+        return (MixtureBoilingSystem)BoilingSystems.For(c, model);
+    }
+}
+
+/// <summary><c>distillplan azeotrope A B [--at P]</c>: minimum- and maximum-boiling azeotropes of a pair.</summary>
+internal static class AzeotropeCommand
+{
+    public static Command Build()
+    {
+        var common = new CommonOptions();
+        var first = new Argument<string>("first") { Description = "First solvent of the pair." };
+        var second = new Argument<string>("second") { Description = "Second solvent of the pair." };
+        var at = new Option<string?>("--at") { Description = "Pressure to search at (default 1013.25 mbar)." };
+        var model = MixtureCommand.ModelOption();
+        var cmd = new Command("azeotrope", "Search a pair for minimum- and maximum-boiling azeotropes at a pressure.");
+        cmd.Arguments.Add(first);
+        cmd.Arguments.Add(second);
+        cmd.Options.Add(at);
+        cmd.Options.Add(model);
+        common.AddOutput(cmd);
+        cmd.SetAction(r =>
+        {
+            var library = common.LoadLibrary(r);
+            var unit = common.DisplayUnit(r);
+            Solvent a = library.Find(r.GetValue(first)!), b = library.Find(r.GetValue(second)!);
+            if (ReferenceEquals(a, b)) throw new InputException("second", r.GetValue(second)!, "a solvent other than the first");
+            var p = r.GetValue(at) is string s ? PressureUnits.Parse(s, "--at", Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa)) : Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
+            var kind = BoilingSystems.ParseModel(r.GetValue(model));
+            var result = AzeotropeSearch.Find(MixtureComponent.FromSolvent(a), MixtureComponent.FromSolvent(b), p.Pascal, kind);
+            var az = result.Azeotropes.FirstOrDefault();
+            var o = r.InvocationConfiguration.Output;
+            string KindWord(AzeotropeKind k) => k == AzeotropeKind.MinimumBoiling ? "minimum-boiling" : "maximum-boiling";
+            if (r.GetValue(common.Json))
+            {
+                Json.Write(o, new
+                {
+                    azeotrope = result.Found,
+                    temperature_c = az is null ? (double?)null : Json.R(az.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
+                    mole_fraction = az?.MoleFractions.ToDictionary(kv => kv.Key, kv => Json.R(kv.Value, 4)),
+                    kind = az is null ? null : KindWord(az.Kind),
+                    model = result.Model,
+                    fallback_reason = result.FallbackReason,
+                    pressure_mbar = Json.R(p.Millibar, 3),
+                    pure_boiling_points_c = result.PureBoilingPointsK.ToDictionary(kv => kv.Key, kv => Json.R(kv.Value - PhysicalConstants.ZeroCelsiusK, 3)),
+                    all = result.Azeotropes.Select(x => new { temperature_c = Json.R(x.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3), mole_fraction = x.MoleFractions, kind = KindWord(x.Kind) }).ToList(),
+                });
+                return CliApp.Ok;
+            }
+            o.WriteLine($"{a.Name} + {b.Name} at {PressureUnits.Format(p, unit)}  [model: {result.Model}]");
+            if (result.FallbackReason is string f) o.WriteLine($"  Note: {f} (an ideal solution has no azeotrope)");
+            if (!result.Found) o.WriteLine("  No azeotrope found: the pair is zeotropic at this pressure.");
+            foreach (var x in result.Azeotropes)
+                o.WriteLine($"  {KindWord(x.Kind)} azeotrope at {Temperature.FromKelvin(x.TemperatureK)}: " +
+                            string.Join(", ", x.MoleFractions.Select(kv => $"{kv.Key} {kv.Value:0.###}")) + " (mole fraction)");
+            return CliApp.Ok;
+        });
+        return cmd;
+    }
+}

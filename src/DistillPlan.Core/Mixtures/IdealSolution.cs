@@ -1,0 +1,32 @@
+namespace DistillPlan.Core.Mixtures;
+
+/// <summary>
+/// Ideal solution: γ_i = 1, so modified Raoult's law becomes Raoult's law, y_i P = x_i Psat_i.
+/// The fallback when UNIFAC lacks a parameter, and a fair model for close chemical relatives
+/// (benzene–toluene, hexane–heptane).
+/// </summary>
+public sealed class IdealSolution : IActivityModel
+{
+    /// <summary>Creates the ideal model for <paramref name="componentCount"/> components.</summary>
+    /// <param name="componentCount">Number of components, ≥ 1.</param>
+    public IdealSolution(int componentCount)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(componentCount, 1);
+        ComponentCount = componentCount;
+    }
+
+    /// <inheritdoc />
+    public string Name => "ideal";
+
+    /// <inheritdoc />
+    public int ComponentCount { get; }
+
+    /// <inheritdoc />
+    public double[] LnActivityCoefficients(double temperatureK, ReadOnlySpan<double> moleFractions)
+    {
+        if (moleFractions.Length != ComponentCount)
+            throw new ArgumentException(
+                $"expected {ComponentCount} mole fractions, got {moleFractions.Length}", nameof(moleFractions));
+        return new double[ComponentCount];
+    }
+}

@@ -8,7 +8,7 @@ namespace DistillPlan.Tui;
 /// <summary>Entry point of the full-screen planner, opened by <c>distillplan</c> with no verb.</summary>
 public static class PlannerApp
 {
-    /// <summary>Computes the ramp of mixtures; set at start-up by the part of the program that has the strip engine.</summary>
+    /// <summary>Replaces the ramp source for mixtures (default: Core's Rayleigh strip).</summary>
     public static IRampSource? MixtureRampSource { get; set; }
 
     /// <summary>

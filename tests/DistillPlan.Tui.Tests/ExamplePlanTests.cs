@@ -29,10 +29,7 @@ public sealed class ExamplePlanTests
         Assert.Contains("invented", doc.Notes, StringComparison.OrdinalIgnoreCase);
 
         var outcome = new PlannerViewModel(TestLibrary.Library).Compute(doc);
-        // Single-solvent examples must plan; mixture examples plan once the mixture engine is in
-        // Core, and until then must fail with the one-line input message, not a crash.
-        bool pure = !doc.Charge.Contains(',');
-        if (pure) Assert.NotNull(outcome.Plan);
-        if (outcome.Plan is null) Assert.Contains("charge", outcome.Error);
+        Assert.True(outcome.Plan is not null, outcome.Error);
+        Assert.NotNull(outcome.Ramp);
     }
 }

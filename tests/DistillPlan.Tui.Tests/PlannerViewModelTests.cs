@@ -125,12 +125,16 @@ public sealed class PlannerViewModelTests
     }
 
     [Fact]
-    public void A_mixture_without_a_ramp_source_says_why_instead_of_inventing_a_ramp()
+    public void A_mixture_ramp_falls_in_pressure_as_the_light_solvent_leaves()
     {
         var vm = New();
-        var outcome = vm.Compute(vm.Document with { Charge = "ethyl-acetate=100mL,heptane=100mL" });
-        if (outcome.Plan is null) Assert.NotNull(outcome.Error);   // mixtures not in this build of Core
-        else { Assert.Null(outcome.Ramp); Assert.NotNull(outcome.RampNote); }
+        vm.Edit(d => d with { Charge = "ethyl-acetate=100mL,heptane=100mL" });
+        var steps = vm.Outcome.Ramp!.Steps;
+        Assert.True(steps.Count >= 3);
+        Assert.Equal(vm.Outcome.Plan!.VacuumSetpoint.Pascal, steps[0].PressurePa, 0);
+        Assert.All(steps.Zip(steps.Skip(1)), p => Assert.True(p.Second.PressurePa <= p.First.PressurePa));
+        Assert.Equal("ethyl acetate", vm.RampKey);
+        Assert.True(steps[^1].Liquid["ethyl acetate"] < steps[0].Liquid["ethyl acetate"]);
     }
 
     [Fact]

@@ -31,7 +31,7 @@ wait_for "Vacuum" 30 || fail "the planner did not show a vacuum setpoint within 
 
 tmux send-keys -t "$SESSION" -l "$SOLVENT"
 tmux send-keys -t "$SESSION" Enter
-wait_for "$SOLVENT |" 10 || fail "the readout did not switch to $SOLVENT"
+wait_for "| $SOLVENT" 10 || fail "the readout did not switch to $SOLVENT"
 SHOWN=$(sed -n 's/.*Vacuum \([0-9.]*\) mbar.*/\1/p' "$WORK/screen" | head -1)
 [ -n "$SHOWN" ] || fail "no 'Vacuum N mbar' on screen"
 

@@ -26,11 +26,11 @@ public sealed class PlannerViewModel
     private readonly IRampSource _pureRamp = new PureSolventRamp();
     private PlanDocument _saved;
 
-    /// <summary>A planner over a library; <paramref name="mixtureRamp"/> computes the ramp of mixtures when given.</summary>
+    /// <summary>A planner over a library; <paramref name="mixtureRamp"/> replaces the Rayleigh-strip ramp of mixtures when given.</summary>
     public PlannerViewModel(SolventLibrary library, IRampSource? mixtureRamp = null)
     {
         Library = library;
-        MixtureRamp = mixtureRamp;
+        MixtureRamp = mixtureRamp ?? new MixtureStripRamp();
         Document = new PlanDocument { Charge = DefaultCharge };
         _saved = Document;
         Outcome = Compute(Document);
@@ -38,8 +38,8 @@ public sealed class PlannerViewModel
 
     /// <summary>The solvent library.</summary>
     public SolventLibrary Library { get; }
-    /// <summary>Computes the ramp of a mixture; null when this build has no strip engine.</summary>
-    public IRampSource? MixtureRamp { get; }
+    /// <summary>Computes the ramp of a mixture.</summary>
+    public IRampSource MixtureRamp { get; }
     /// <summary>What the user has entered.</summary>
     public PlanDocument Document { get; private set; }
     /// <summary>The latest plan, or why there is none.</summary>
@@ -137,8 +137,6 @@ public sealed class PlannerViewModel
         try { curve = CurvePicture.For(plan); } catch (DistillPlanException) { }
 
         var source = plan.Charge.IsPure ? _pureRamp : MixtureRamp;
-        if (source is null)
-            return new PlanOutcome(plan, null, curve, null, "The pressure ramp of a mixture needs the strip engine, which this build does not include yet.");
         try { return new PlanOutcome(plan, null, curve, source.Compute(plan.Charge, plan), null); }
         catch (DistillPlanException e) { return new PlanOutcome(plan, null, curve, null, "No ramp: " + e.Message); }
     }
@@ -155,7 +153,8 @@ public sealed class PlannerViewModel
             return ("Bath  --    Vapour  --    Vacuum  --    Condenser  --", "Cannot plan: " + Outcome.Error);
         string vacuum = p.AtAtmosphericPressure ? P(p.VacuumSetpoint) + " (none needed)" : P(p.VacuumSetpoint);
         return ($"Bath {p.Bath}   Vapour {p.Vapor}   Vacuum {vacuum}   Condenser <= {p.CondenserMax}",
-                $"{p.Charge.Describe()} | set by {p.LimitingConstraint} | {SeverityText.Summary(p.Checks)}");
+                // Checks first, charge last: on a narrow screen the long mixture description is what gets cut.
+                $"{SeverityText.Summary(p.Checks)} | set by {p.LimitingConstraint} | {p.Charge.Describe()}");
     }
 
     /// <summary>The plan pane: setpoints, approach, notes, conflicts, checks with what to do, assumptions, cautions.</summary>

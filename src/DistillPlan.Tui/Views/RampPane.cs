@@ -41,7 +41,7 @@ internal sealed class RampPane : View
         _graph.Annotations.Clear();
         if (vm.Outcome.Ramp is not Ramp ramp || ramp.Steps.Count == 0)
         {
-            _note.Text = vm.Outcome.Error is string e ? "No ramp: " + e : vm.Outcome.RampNote ?? "No ramp.";
+            _note.Text = vm.Outcome.Error is string e ? "No ramp: " + e : vm.Outcome.RampNote ?? vm.Outcome.Ramp?.EndReason ?? "No ramp.";
             _graph.SetNeedsDraw();
             return;
         }

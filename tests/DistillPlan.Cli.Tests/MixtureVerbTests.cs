@@ -92,3 +92,16 @@ public class MixtureVerbTests
         Assert.Contains(mentions, r.Error);
     }
 }
+
+/// <summary>A strip with a dissolved product (demo amounts of an invented product).</summary>
+public class StripWithProductTests
+{
+    [Fact]
+    public void A_non_volatile_product_stays_in_the_residue_and_lowers_the_pressure()
+    {
+        var with = CliRunner.Json("strip", "water=100mL,ethanol=50mL", "--product-mass", "20g", "--product-molar-mass", "350", "--end", "left=10%");
+        var steps = with.GetProperty("steps").EnumerateArray().ToList();
+        foreach (var s in steps) Assert.Equal(0.0, s.GetProperty("distillate_mol").GetProperty("product").GetDouble(), 1e-12);
+        Assert.Equal(20.0 / 350, steps[^1].GetProperty("residue_mol").GetProperty("product").GetDouble(), 1e-6);
+    }
+}

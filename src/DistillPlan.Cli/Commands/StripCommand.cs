@@ -44,11 +44,16 @@ internal static class StripCommand
             var amounts = c.Components.Select(x => x.Moles).ToList();
             if (product is not null)
             {
+                // A product's mass means something only beside real solvent amounts.
+                if (c.IsRelative)
+                    throw new InputException("charge", r.GetValue(charge)!, "amounts with units (mL, L, g, mol) when a product is given");
                 components.Add(MixtureComponent.NonVolatile("product", product.MolarMassGPerMol));
-                amounts.Add(c.IsRelative ? product.Moles / 1.0 : product.Moles);
+                amounts.Add(product.Moles);
             }
             var equilibrium = PhaseEquilibrium.Create(components, BoilingSystems.ParseModel(r.GetValue(model)));
             var options = ReadEnd(r.GetValue(end), StripPlanner.DefaultOptions(c, equipment, rules), c);
+            // The product has no liquid density: count fractions in moles then.
+            if (product is not null) options = options with { Basis = StripBasis.Moles };
 
             StripResult result;
             string? pressureText = r.GetValue(pressure);

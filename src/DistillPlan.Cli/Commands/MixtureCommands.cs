@@ -42,7 +42,7 @@ internal static class MixtureCommand
             }
             else
             {
-                var p = r.GetValue(at) is string a ? PressureUnits.Parse(a, "--at", Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa)) : Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
+                var p = AtOrStandard(r.GetValue(at));
                 bubble = system.Equilibrium.BubbleTemperature(p.Pascal, x);
                 dew = system.Equilibrium.DewTemperature(p.Pascal, x);
             }
@@ -82,6 +82,13 @@ internal static class MixtureCommand
 
     internal static Option<string?> ModelOption() => new("--model") { Description = "Activity model: unifac (default where parameters exist; falls back to ideal and says why) or ideal." };
 
+    /// <summary>The pressure given to --at, or one standard atmosphere.</summary>
+    internal static Pressure AtOrStandard(string? text)
+    {
+        var standard = Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
+        return text is null ? standard : PressureUnits.Parse(text, "--at", standard);
+    }
+
     internal static MixtureBoilingSystem Mixture(Charge c, string? model)
     {
         if (c.IsPure) throw new InputException("charge", c.Describe(), "two or more components, e.g. benzene=50,toluene=50");
@@ -111,7 +118,7 @@ internal static class AzeotropeCommand
             var unit = common.DisplayUnit(r);
             Solvent a = library.Find(r.GetValue(first)!), b = library.Find(r.GetValue(second)!);
             if (ReferenceEquals(a, b)) throw new InputException("second", r.GetValue(second)!, "a solvent other than the first");
-            var p = r.GetValue(at) is string s ? PressureUnits.Parse(s, "--at", Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa)) : Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
+            var p = MixtureCommand.AtOrStandard(r.GetValue(at));
             var kind = BoilingSystems.ParseModel(r.GetValue(model));
             var result = AzeotropeSearch.Find(MixtureComponent.FromSolvent(a), MixtureComponent.FromSolvent(b), p.Pascal, kind);
             var az = result.Azeotropes.FirstOrDefault();

@@ -51,7 +51,7 @@ internal static class StripCommand
                 amounts.Add(product.Moles);
             }
             var equilibrium = PhaseEquilibrium.Create(components, BoilingSystems.ParseModel(r.GetValue(model)));
-            var options = ReadEnd(r.GetValue(end), StripPlanner.DefaultOptions(c, equipment, rules), c);
+            var options = ReadEnd(r.GetValue(end), StripPlanner.DefaultOptions(c, equipment, rules), c, library);
             // The product has no liquid density: count fractions in moles then.
             if (product is not null) options = options with { Basis = StripBasis.Moles };
 
@@ -88,7 +88,7 @@ internal static class StripCommand
         return new Product(grams, mm, null);
     }
 
-    private static StripOptions ReadEnd(string? end, StripOptions defaults, Charge c)
+    private static StripOptions ReadEnd(string? end, StripOptions defaults, Charge c, Core.Library.SolventLibrary library)
     {
         if (string.IsNullOrWhiteSpace(end)) return defaults;
         const string allowed = "left=10% (fraction of the charge left), residual=NAME:0.01, pump, or dry";
@@ -111,9 +111,9 @@ internal static class StripCommand
             string[] parts = end.Trim()[9..].Split(':');
             if (parts.Length != 2 || !double.TryParse(parts[1], NumberStyles.Float, CultureInfo.InvariantCulture, out double x) || !(x > 0) || !(x < 1))
                 throw new InputException("--end", end, "residual=NAME:FRACTION with a mole fraction between 0 and 1, e.g. residual=thf:0.01");
-            var s = c.Components.FirstOrDefault(k => Core.Library.SolventLibrary.Normalise(k.Solvent.Name) == Core.Library.SolventLibrary.Normalise(parts[0])
-                                                   || k.Solvent.Aliases.Any(a => Core.Library.SolventLibrary.Normalise(a) == Core.Library.SolventLibrary.Normalise(parts[0])))
-                    ?? throw new InputException("--end", end, "residual= one of the charge's components: " + string.Join(", ", c.Components.Select(k => k.Solvent.Name)));
+            var s = library.TryFind(parts[0], out var named) ? c.Components.FirstOrDefault(k => ReferenceEquals(k.Solvent, named)) : null;
+            if (s is null)
+                throw new InputException("--end", end, "residual= one of the charge's components: " + string.Join(", ", c.Components.Select(k => k.Solvent.Name)));
             return defaults with { StopAtResidualMoleFraction = new ResidualMoleFractionTarget(s.Solvent.Name, x), StopAtFractionLeft = null, PumpLimitPa = null };
         }
         throw new InputException("--end", end, allowed);

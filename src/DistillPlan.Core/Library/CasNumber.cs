@@ -21,7 +21,4 @@ public static partial class CasNumber
         for (int i = 0; i < digits.Length; i++) sum += (digits[^(i + 1)] - '0') * (i + 1);
         return sum % 10 == m.Groups[3].Value[0] - '0';
     }
-
-    /// <summary>True when the text has the shape of a CAS number (whatever its check digit).</summary>
-    public static bool LooksLike(string text) => Shape().IsMatch(text.Trim());
 }

@@ -15,7 +15,8 @@ public sealed class MixtureStripRamp : IRampSource
     {
         if (plan.System is not MixtureBoilingSystem system)
             throw new ArgumentException("a mixture ramp needs a mixture plan", nameof(plan));
-        var strip = StripPlanner.RampAtVaporTemperature(system, charge, plan.Vapor, plan.Equipment, plan.Rules);
+        // The planner already ran this strip for its ramp note; only a plan at atmospheric pressure has none.
+        var strip = plan.Ramp ?? StripPlanner.RampAtVaporTemperature(system, charge, plan.Vapor, plan.Equipment, plan.Rules);
         if (strip is null)
             return new Ramp([], "The strip could not be computed for this charge; the setpoints above still stand.", "Rayleigh strip");
         var steps = strip.Steps.Select(s => new RampStep(s.EvaporatedMoleFraction, s.PressurePa, s.TemperatureK, plan.Bath.Kelvin, s.Liquid, s.Vapor)).ToList();

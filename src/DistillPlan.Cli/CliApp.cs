@@ -49,6 +49,21 @@ public static class CliApp
         }
 
         var root = BuildRoot();
+        // `distillplan plan.yaml` opens a saved plan in the text UI.
+        if (args.Length == 1 && !args[0].StartsWith('-') && root.Subcommands.All(c => c.Name != args[0]))
+        {
+            if (!File.Exists(args[0]))
+            {
+                error.WriteLine($"distillplan: '{args[0]}' is neither a verb ({string.Join(", ", root.Subcommands.Select(c => c.Name))}) nor a plan file (see distillplan --help)");
+                return BadInput;
+            }
+            if (OpenPlanner is null)
+            {
+                error.WriteLine("distillplan: the text UI is not available in this build; run the plan with: distillplan setpoints --plan " + args[0]);
+                return BadInput;
+            }
+            return Guard(() => OpenPlanner(args), error);
+        }
         var parse = root.Parse(args);
         if (parse.Errors.Count > 0)
         {

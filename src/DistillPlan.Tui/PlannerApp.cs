@@ -8,9 +8,6 @@ namespace DistillPlan.Tui;
 /// <summary>Entry point of the full-screen planner, opened by <c>distillplan</c> with no verb.</summary>
 public static class PlannerApp
 {
-    /// <summary>Replaces the ramp source for mixtures (default: Core's Rayleigh strip).</summary>
-    public static IRampSource? MixtureRampSource { get; set; }
-
     /// <summary>
     /// Runs the planner until Ctrl+Q and returns the exit code (0). The library is loaded before
     /// the screen is taken over, so a broken library is reported as one line on a normal terminal.
@@ -18,7 +15,7 @@ public static class PlannerApp
     public static int Run(string[] args)
     {
         var library = SolventLibrary.LoadWithUser(null);
-        var vm = new PlannerViewModel(library, MixtureRampSource);
+        var vm = new PlannerViewModel(library);
         if (args.Length > 0) vm.Open(args[0]);
 
         using IApplication app = Application.Create();

@@ -1,6 +1,9 @@
 using DistillPlan.Core.Checks;
 using DistillPlan.Core.PlanFiles;
 using DistillPlan.Core.Planning;
+using DistillPlan.Core.Planning.Settings;
+using DistillPlan.Core.Reports;
+using DistillPlan.Reports;
 using DistillPlan.Tui.Model;
 
 namespace DistillPlan.Tui.Tests;
@@ -13,9 +16,9 @@ public sealed class PlannerViewModelTests
     // the view model must show what `distillplan setpoints` computes, not a number of its own.
     private static Plan Reference(string charge, PlanInputs? inputs = null)
     {
-        var (e, r) = (inputs ?? new PlanInputs()).Build();
+        var setup = (inputs ?? new PlanInputs()).Build();
         var c = ChargeParser.Parse(charge, Basis.Volume, TestLibrary.Library);
-        return SetpointPlanner.Plan(c, BoilingSystems.For(c, null), e, r);
+        return SetpointPlanner.Plan(c, BoilingSystems.For(c, null), setup);
     }
 
     [Fact]
@@ -35,8 +38,8 @@ public sealed class PlannerViewModelTests
         var vm = New();
         int changes = 0;
         vm.Changed += () => changes++;
-        vm.Edit(d => d with { Charge = "ethanol", Inputs = d.Inputs with { CoolantTemp = "0" } });
-        var expected = Reference("ethanol", new PlanInputs { CoolantTemp = "0" });
+        vm.Edit(d => d with { Charge = "ethanol", Inputs = d.Inputs.With("coolant-temp", "0") });
+        var expected = Reference("ethanol", PlanInputs.Of(("coolant-temp", "0")));
         Assert.Equal(expected.VacuumSetpoint, vm.Outcome.Plan!.VacuumSetpoint);
         Assert.Equal(expected.Bath, vm.Outcome.Plan.Bath);
         Assert.Equal(1, changes);
@@ -62,7 +65,7 @@ public sealed class PlannerViewModelTests
     public void A_bad_equipment_value_names_its_option_in_place_of_the_plan()
     {
         var vm = New();
-        vm.Edit(d => d with { Inputs = d.Inputs with { PumpLimit = "5 bananas" } });
+        vm.SetSetting("pump-limit", "5 bananas");
         Assert.Null(vm.Outcome.Plan);
         Assert.StartsWith("--pump-limit", vm.Outcome.Error);
     }
@@ -72,12 +75,13 @@ public sealed class PlannerViewModelTests
     {
         var vm = New();
         vm.Edit(d => d with { Charge = "thf" });
-        string report = vm.PlanReport();
+        // A wide pane, so no message is wrapped and each can be found whole.
+        string report = vm.PlanReport(width: 1000);
         Assert.NotEmpty(vm.Outcome.Plan!.Checks);
         foreach (var c in vm.Outcome.Plan.Checks)
         {
-            Assert.Contains($"{SeverityText.Label(c.Severity)}  {c.Code}: {c.Message}", report);
-            Assert.Contains(c.Action, report);
+            Assert.Contains($"{SeverityText.Label(c.Severity)} {c.Code}: {c.Message(vm.Display)}", report);
+            Assert.Contains(c.Action(vm.Display), report);
         }
         foreach (var caution in Cautions.General) Assert.Contains(caution, report);
     }
@@ -119,9 +123,23 @@ public sealed class PlannerViewModelTests
     {
         var vm = New();
         var ramp = vm.Outcome.Ramp!;
-        Assert.All(ramp.Steps, s => Assert.Equal(vm.Outcome.Plan!.VacuumSetpoint.Pascal, s.PressurePa));
-        Assert.Equal(PureSolventRamp.StopFraction, ramp.Steps[^1].EvaporatedFraction, 9);
-        Assert.Equal(ramp.Steps.Count, vm.RampRows().Count);
+        Assert.All(ramp.Steps, s => Assert.Equal(vm.Outcome.Plan!.VacuumSetpoint.Pascal, s.Pressure.Pascal, 1e-6 * s.Pressure.Pascal));
+        // The strip planner's default end: 5 % of the charge left (ethyl acetate is no peroxide former).
+        Assert.Equal(1 - StripPlanner.DefaultFractionLeft, ramp.Steps[^1].Evaporated, 6);
+        Assert.Equal(ramp.Steps.Count, vm.RampTable!.Rows.Count);
+    }
+
+    [Fact]
+    public void The_ramp_is_the_strip_the_command_line_plans_with_the_same_basis_and_end()
+    {
+        // Pure DMF: the UI once stopped at 90 % "for peroxides" while the CLI went to 95 %.
+        var vm = New();
+        vm.Edit(d => d with { Charge = "dmf" });
+        var expected = StripPlanner.Plan(vm.Outcome.Plan!, new StripRequest(null, StripEnd.Default), null, reportEvery: 0.1);
+        Assert.Equal(expected.Steps[^1].Evaporated, vm.Outcome.Ramp!.Steps[^1].Evaporated, 9);
+        Assert.Equal("volume", vm.Outcome.Ramp.Basis);
+        Assert.Equal(expected.EndText(DisplayFormat.Default), vm.Outcome.Ramp.EndText(DisplayFormat.Default));
+        Assert.DoesNotContain("peroxide", vm.Outcome.Ramp.EndText(DisplayFormat.Default));
     }
 
     [Fact]
@@ -131,10 +149,12 @@ public sealed class PlannerViewModelTests
         vm.Edit(d => d with { Charge = "ethyl-acetate=100mL,heptane=100mL" });
         var steps = vm.Outcome.Ramp!.Steps;
         Assert.True(steps.Count >= 3);
-        Assert.Equal(vm.Outcome.Plan!.VacuumSetpoint.Pascal, steps[0].PressurePa, 0);
-        Assert.All(steps.Zip(steps.Skip(1)), p => Assert.True(p.Second.PressurePa <= p.First.PressurePa));
-        Assert.Equal("ethyl acetate", vm.RampKey);
+        Assert.Equal(vm.Outcome.Plan!.VacuumSetpoint.Pascal, steps[0].Pressure.Pascal, 1e-6 * steps[0].Pressure.Pascal);
+        Assert.All(steps.Zip(steps.Skip(1)), p => Assert.True(p.Second.Pressure.Pascal <= p.First.Pressure.Pascal));
         Assert.True(steps[^1].Liquid["ethyl acetate"] < steps[0].Liquid["ethyl acetate"]);
+        // The table shows every component's liquid fraction.
+        Assert.Contains(vm.RampTable!.Columns, c => c.Header == "x ethyl acetate" && !c.MachineOnly);
+        Assert.Contains(vm.RampTable.Columns, c => c.Header == "x heptane" && !c.MachineOnly);
     }
 
     [Fact]
@@ -183,9 +203,22 @@ public sealed class PlannerViewModelTests
     [Fact]
     public void Wrapping_keeps_short_lines_as_they_are_and_indents_continuations()
     {
-        var lines = TextWrap.Lines("  short   aligned\n[!] WARNING a-long-code: one two three four five six", 24);
+        var lines = LineWrap.Wrap("  short   aligned\n[!] WARNING a-long-code: one two three four five six", 24, 2).ToList();
         Assert.Equal("  short   aligned", lines[0]);
         Assert.All(lines, l => Assert.True(l.Length <= 24));
         Assert.StartsWith("  ", lines[2]);
+    }
+
+    [Theory]
+    [InlineData(90, 78)]
+    [InlineData(100, 20)]
+    [InlineData(20, 18)]
+    [InlineData(5000, 10)]
+    public void Wrapping_ends_for_any_indent_and_width(int spaces, int width)
+    {
+        // A line indented by about the pane width once looped for ever in the plan pane.
+        var lines = LineWrap.Wrap(new string(' ', spaces) + "word another-word " + new string('x', 300), width).ToList();
+        Assert.All(lines, l => Assert.True(l.Length <= Math.Max(width, 8)));
+        Assert.Contains(lines, l => l.Contains("word"));
     }
 }

@@ -1,70 +1,83 @@
 using System.CommandLine;
+using DistillPlan.Core;
 using DistillPlan.Core.Library;
-using DistillPlan.Core.Planning;
+using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Core.Quantities;
+using DistillPlan.Core.Reports;
 
 namespace DistillPlan.Cli.Commands;
 
-/// <summary>Options shared by several verbs, with the spellings of DESIGN §5.</summary>
+/// <summary>Output and library options shared by the verbs.</summary>
 internal sealed class CommonOptions
 {
-    public Option<bool> Json { get; } = new("--json") { Description = "Write JSON (mbar and °C, snake_case fields) instead of text." };
-    public Option<string> Unit { get; } = new("--unit") { Description = "Pressure unit for text output: mbar, hPa, Pa, kPa, bar, Torr, mmHg, inHg, psia, atm.", DefaultValueFactory = _ => "mbar" };
-    public Option<string?> Library { get; } = new("--library") { Description = "A solvents YAML file merged over the shipped library (default: ~/.config/distillplan/solvents.yaml when present)." };
-    public Option<string> Basis { get; } = new("--basis") { Description = "What bare numbers in a charge mean: volume, mass or mole.", DefaultValueFactory = _ => "volume" };
+    public static readonly string[] Formats = ["text", "json", "markdown", "csv"];
 
-    /// <summary>Adds the output and library options to a command.</summary>
-    public void AddOutput(Command c)
+    public Option<bool> Json { get; } = new("--json") { Description = "Write JSON (mbar and °C, snake_case fields); the same as --format json." };
+    public Option<string?> Format { get; } = new("--format") { Description = "Output format: text (default), json, markdown or csv." };
+    public Option<string?> Unit { get; } = new("--unit") { Description = "Pressure unit for people's output: mbar (default), hPa, Pa, kPa, bar, Torr, mmHg, inHg, psia, atm." };
+    public Option<string?> Library { get; } = new("--library") { Description = "A solvents YAML file merged over the shipped library (default: ~/.config/distillplan/solvents.yaml when present)." };
+    public Option<string?> Output { get; } = new("--output", "-o") { Description = "Write the output to this file instead of the terminal." };
+    public Option<string?> Plot { get; } = new("--plot") { Description = "Also draw the plot to FILE.svg or FILE.png." };
+    public Option<bool> Force { get; } = new("--force") { Description = "Replace existing --output or --plot files (otherwise they are never overwritten)." };
+
+    /// <summary>Adds the output and library options; <paramref name="files"/> adds -o, --plot and --force.</summary>
+    public void AddOutput(Command c, bool files = false, bool formats = false)
     {
         c.Options.Add(Json);
+        if (formats) c.Options.Add(Format);
         c.Options.Add(Unit);
         c.Options.Add(Library);
+        if (!files) return;
+        c.Options.Add(Output);
+        c.Options.Add(Plot);
+        c.Options.Add(Force);
     }
 
     public SolventLibrary LoadLibrary(ParseResult r) => SolventLibrary.LoadWithUser(r.GetValue(Library));
 
-    public PressureUnit DisplayUnit(ParseResult r) => PressureUnits.ForDisplay(r.GetValue(Unit) ?? "mbar");
+    /// <summary>The unit asked for, or <paramref name="fallback"/> (a plan file's) when --unit is not given.</summary>
+    public PressureUnit DisplayUnit(ParseResult r, string? fallback = null) => PressureUnits.ForDisplay(r.GetValue(Unit) ?? fallback ?? "mbar");
 
-    public Basis ParseBasis(ParseResult r) => (r.GetValue(Basis) ?? "volume").ToLowerInvariant() switch
+    public bool IsJson(ParseResult r) => FormatOf(r) == "json";
+
+    /// <summary>text, json, markdown or csv; --json is the same as --format json.</summary>
+    public string FormatOf(ParseResult r)
     {
-        "volume" => Core.Planning.Basis.Volume,
-        "mass" => Core.Planning.Basis.Mass,
-        "mole" or "mol" or "molar" => Core.Planning.Basis.Mole,
-        var other => throw new Core.InputException("--basis", other, "volume, mass or mole"),
-    };
+        string? given = r.GetValue(Format)?.Trim().ToLowerInvariant();
+        if (given is not null && !Formats.Contains(given)) throw new InputException("--format", given, string.Join(", ", Formats));
+        if (r.GetValue(Json))
+        {
+            if (given is not null && given != "json") throw new InputException("--format", given, "json when --json is given (or leave out --json)");
+            return "json";
+        }
+        return given ?? "text";
+    }
+
+    public DisplayFormat Display(ParseResult r, string? fallback = null) => new(DisplayUnit(r, fallback));
 }
 
-/// <summary>The options that tune a plan (DESIGN §5 spellings), read into <see cref="PlanInputs"/>.</summary>
-internal sealed class PlanOptions
+/// <summary>
+/// The plan settings as command-line options, generated from the settings table (one option per
+/// setting, spelt as its key, its help text from the table).
+/// </summary>
+internal sealed class SettingOptions
 {
-    public Option<string?> VaporTemp { get; } = new("--vapor-temp") { Description = "Preferred vapour temperature (default 40 °C; 40, 40C, 313K, 104F)." };
-    public Option<string?> BathMax { get; } = new("--bath-max") { Description = "Highest bath or jacket temperature (default 95 °C for a water bath)." };
-    public Option<string?> CoolantTemp { get; } = new("--coolant-temp") { Description = "Coolant temperature at the condenser (default 10 °C)." };
-    public Option<string?> PumpLimit { get; } = new("--pump-limit") { Description = "The pump's ultimate pressure (default 5 mbar; 5mbar, 3 Torr, -0.99barg)." };
-    public Option<string?> DeltaT { get; } = new("--delta-t") { Description = "ΔT steps in K: one for both (20), or bath→vapour,vapour→condenser (25,20)." };
-    public Option<string?> ProductMax { get; } = new("--product-max") { Description = "Highest temperature the product may see; the bath stays at or below it." };
-    public Option<string?> Atmospheric { get; } = new("--atmospheric") { Description = "Local atmospheric pressure (default 1013.25 mbar)." };
-    public Option<string?> Altitude { get; } = new("--altitude") { Description = "Altitude in metres, for the ICAO standard atmosphere (instead of --atmospheric)." };
-    public Option<string?> Heating { get; } = new("--heating") { Description = "Heating medium: water-bath (95 °C), oil-bath (180 °C) or jacket (150 °C); sets the default limit." };
-    public Option<string?> Pump { get; } = new("--pump") { Description = "Pump kind: diaphragm (5 mbar), rotary-vane (0.05 mbar), aspirator (25 mbar), liquid-ring (35 mbar); sets the default limit." };
+    private readonly List<(PlanSetting Setting, Option<string?> Option)> _options;
+
+    public SettingOptions(params SettingGroup[] groups) : this(PlanSettings.All.Where(s => groups.Contains(s.Group))) { }
+
+    public SettingOptions(IEnumerable<PlanSetting> settings) =>
+        _options = settings.Select(s => (s, new Option<string?>(s.Option) { Description = s.Help })).ToList();
+
+    /// <summary>Only these setting keys.</summary>
+    public static SettingOptions Of(params string[] keys) => new(keys.Select(PlanSettings.Get));
 
     public void AddTo(Command c)
     {
-        foreach (var o in new Option[] { VaporTemp, BathMax, CoolantTemp, PumpLimit, DeltaT, ProductMax, Atmospheric, Altitude, Heating, Pump })
-            c.Options.Add(o);
+        foreach (var (_, o) in _options) c.Options.Add(o);
     }
 
-    public PlanInputs Read(ParseResult r) => new()
-    {
-        VaporTemp = r.GetValue(VaporTemp),
-        BathMax = r.GetValue(BathMax),
-        CoolantTemp = r.GetValue(CoolantTemp),
-        PumpLimit = r.GetValue(PumpLimit),
-        DeltaT = r.GetValue(DeltaT),
-        ProductMax = r.GetValue(ProductMax),
-        Atmospheric = r.GetValue(Atmospheric),
-        Altitude = r.GetValue(Altitude),
-        Heating = r.GetValue(Heating),
-        Pump = r.GetValue(Pump),
-    };
+    /// <summary>What the user typed, by setting key.</summary>
+    public PlanInputs Read(ParseResult r) =>
+        _options.Aggregate(new PlanInputs(), (inputs, t) => r.GetValue(t.Option) is string v ? inputs.With(t.Setting.Key, v) : inputs);
 }

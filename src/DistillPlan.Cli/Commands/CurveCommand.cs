@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.Text.Json.Nodes;
 using DistillPlan.Cli.Output;
 using DistillPlan.Core;
 using DistillPlan.Core.Library;
@@ -19,12 +20,12 @@ internal static class CurveCommand
         var name = new Argument<string>("name") { Description = "Solvent name, alias or CAS number." };
         var at = new Option<string?>("--at") { Description = "Pressure to give the boiling temperature at (25mbar, 15 Torr, -0.9barg; bare number = mbar)." };
         var temp = new Option<string?>("--temp") { Description = "Temperature to give the vapour pressure at (60, 60C, 333K, 140F; bare number = °C)." };
-        var atmospheric = new Option<string?>("--atmospheric") { Description = "Local atmospheric pressure, for gauge readings in --at (default 1013.25 mbar)." };
+        var atmospheric = SettingOptions.Of("atmospheric");
         var cmd = new Command("curve", "Vapour pressure at a temperature, or boiling temperature at a pressure, with the source of the curve.");
         cmd.Arguments.Add(name);
         cmd.Options.Add(at);
         cmd.Options.Add(temp);
-        cmd.Options.Add(atmospheric);
+        atmospheric.AddTo(cmd);
         common.AddOutput(cmd);
 
         cmd.SetAction(r =>
@@ -34,22 +35,19 @@ internal static class CurveCommand
             var solvent = library.Find(r.GetValue(name)!);
             string? atText = r.GetValue(at), tempText = r.GetValue(temp);
             var o = r.InvocationConfiguration.Output;
-            bool json = r.GetValue(common.Json);
+            bool json = common.IsJson(r);
             if (atText is not null && tempText is not null)
                 throw new InputException("--at", atText, "either --at (a pressure) or --temp (a temperature), not both");
 
             if (atText is not null)
             {
-                var atmosphere = new Core.Planning.PlanInputs { Atmospheric = r.GetValue(atmospheric) }.ParseAtmosphere();
+                var atmosphere = atmospheric.Read(r).Build().Equipment.Atmosphere;
                 var p = PressureUnits.Parse(atText, "--at", atmosphere);
                 var t = solvent.VaporPressure.SaturationTemperature(p.Pascal);
                 if (json)
-                    Json.Write(o, new
-                    {
-                        solvent = solvent.Name, boiling_temperature_c = Json.R(t.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
-                        pressure_mbar = Json.R(p.Millibar, 4), source = library.Cite(t.Curve.Source), source_key = t.Curve.Source,
-                        form = t.Curve.Form, extrapolated = t.Extrapolated, range_c = Range(t.Curve),
-                    });
+                    J.Write(o, J.Obj(("solvent", solvent.Name), ("boiling_temperature_c", J.N(t.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
+                        ("pressure_mbar", J.N(p.Millibar, 4)), ("source", library.Cite(t.Curve.Source)), ("source_key", t.Curve.Source),
+                        ("form", t.Curve.Form), ("extrapolated", t.Extrapolated), ("range_c", Range(t.Curve))));
                 else
                     o.WriteLine($"{solvent.Name} boils at {Temperature.FromKelvin(t.TemperatureK)} at {PressureUnits.Format(p, unit)}" +
                                 $"{(t.Extrapolated ? "  (EXTRAPOLATED beyond the fitted range)" : "")}\n  curve: {t.Curve.Form}, {library.Cite(t.Curve.Source)}");
@@ -60,12 +58,9 @@ internal static class CurveCommand
                 var t = TemperatureUnits.Parse(tempText, "--temp");
                 var p = solvent.VaporPressure.SaturationPressure(t.Kelvin);
                 if (json)
-                    Json.Write(o, new
-                    {
-                        solvent = solvent.Name, vapor_pressure_mbar = Json.R(p.PressurePa / 100, 5), temperature_c = Json.R(t.Celsius, 3),
-                        source = library.Cite(p.Curve.Source), source_key = p.Curve.Source, form = p.Curve.Form,
-                        extrapolated = p.Extrapolated, range_c = Range(p.Curve),
-                    });
+                    J.Write(o, J.Obj(("solvent", solvent.Name), ("vapor_pressure_mbar", J.N(p.PressurePa / 100, 5)), ("temperature_c", J.N(t.Celsius)),
+                        ("source", library.Cite(p.Curve.Source)), ("source_key", p.Curve.Source), ("form", p.Curve.Form),
+                        ("extrapolated", p.Extrapolated), ("range_c", Range(p.Curve))));
                 else
                     o.WriteLine($"{solvent.Name} vapour pressure at {t}: {PressureUnits.Format(Pressure.FromPascal(p.PressurePa), unit)}" +
                                 $"{(p.Extrapolated ? "  (EXTRAPOLATED beyond the fitted range)" : "")}\n  curve: {p.Curve.Form}, {library.Cite(p.Curve.Source)}");
@@ -77,8 +72,8 @@ internal static class CurveCommand
         return cmd;
     }
 
-    private static double[] Range(IVaporPressureCurve c) =>
-        [Json.R(c.TMinK - PhysicalConstants.ZeroCelsiusK, 2), Json.R(c.TMaxK - PhysicalConstants.ZeroCelsiusK, 2)];
+    private static JsonArray Range(IVaporPressureCurve c) =>
+        J.Arr([J.N(c.TMinK - PhysicalConstants.ZeroCelsiusK, 2), J.N(c.TMaxK - PhysicalConstants.ZeroCelsiusK, 2)]);
 
     /// <summary>Boiling temperatures at the pressures people set on a controller.</summary>
     private static readonly double[] TablePressuresMbar = [1, 2, 5, 10, 20, 50, 100, 200, 300, 500, 700, 1013.25];
@@ -93,16 +88,11 @@ internal static class CurveCommand
         }
         if (json)
         {
-            Json.Write(o, new
-            {
-                solvent = s.Name,
-                points = rows.Where(r => r.T is not null).Select(r => new
-                {
-                    pressure_mbar = r.Mbar, boiling_temperature_c = Json.R(r.T!.Value.TemperatureK - PhysicalConstants.ZeroCelsiusK, 2),
-                    source_key = r.T.Value.Curve.Source, extrapolated = r.T.Value.Extrapolated,
-                }).ToList(),
-                curves = s.VaporPressure.Curves.Select(c => new { form = c.Form, source = library.Cite(c.Source), source_key = c.Source, range_c = Range(c) }).ToList(),
-            });
+            J.Write(o, J.Obj(("solvent", s.Name),
+                ("points", J.Arr(rows.Where(r => r.T is not null).Select(r => (JsonNode)J.Obj(
+                    ("pressure_mbar", J.N(r.Mbar, 2)), ("boiling_temperature_c", J.N(r.T!.Value.TemperatureK - PhysicalConstants.ZeroCelsiusK, 2)),
+                    ("source_key", r.T.Value.Curve.Source), ("extrapolated", r.T.Value.Extrapolated))))),
+                ("curves", J.Arr(s.VaporPressure.Curves.Select(c => (JsonNode)J.Obj(("form", c.Form), ("source", library.Cite(c.Source)), ("source_key", c.Source), ("range_c", Range(c))))))));
             return;
         }
         o.WriteLine($"{s.Name}: boiling temperature by pressure");

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.Text.Json.Nodes;
 using DistillPlan.Cli.Output;
 using DistillPlan.Core;
 using DistillPlan.Core.Library;
@@ -17,20 +18,20 @@ internal static class MixtureCommand
         var charge = new Argument<string>("charge") { Description = "Components with amounts: benzene=50,toluene=50 (see --basis)." };
         var at = new Option<string?>("--at") { Description = "Pressure for bubble and dew temperatures (default 1013.25 mbar)." };
         var temp = new Option<string?>("--temp") { Description = "Temperature for bubble and dew pressures, instead of --at." };
-        var model = ModelOption();
+        var settings = SettingOptions.Of("model", "basis");
         var cmd = new Command("mixture", "Bubble and dew points of a mixture, vapour composition, activity coefficients and relative volatility.");
         cmd.Arguments.Add(charge);
         cmd.Options.Add(at);
         cmd.Options.Add(temp);
-        cmd.Options.Add(model);
-        cmd.Options.Add(common.Basis);
+        settings.AddTo(cmd);
         common.AddOutput(cmd);
         cmd.SetAction(r =>
         {
             var library = common.LoadLibrary(r);
             var unit = common.DisplayUnit(r);
-            var c = ChargeParser.Parse(r.GetValue(charge)!, common.ParseBasis(r), library);
-            var system = Mixture(c, r.GetValue(model));
+            var setup = settings.Read(r).Build();
+            var c = ChargeParser.Parse(r.GetValue(charge)!, setup.Basis, library);
+            var system = Mixture(c, setup.Model);
             double[] x = c.MoleFractions();
             EquilibriumPoint bubble, dew;
             if (r.GetValue(temp) is string tt)
@@ -47,24 +48,22 @@ internal static class MixtureCommand
                 dew = system.Equilibrium.DewTemperature(p.Pascal, x);
             }
             var o = r.InvocationConfiguration.Output;
-            static Dictionary<string, double> F(IReadOnlyDictionary<string, double> d) => d.ToDictionary(kv => kv.Key, kv => Json.R(kv.Value, 5));
-            if (r.GetValue(common.Json))
+            static JsonObject F(IReadOnlyDictionary<string, double> d) => J.Map(d, 5);
+            if (common.IsJson(r))
             {
-                Json.Write(o, new
-                {
-                    bubble_temperature_c = Json.R(bubble.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
-                    dew_temperature_c = Json.R(dew.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
-                    bubble_pressure_mbar = Json.R(bubble.PressurePa / 100, 3),
-                    dew_pressure_mbar = Json.R(dew.PressurePa / 100, 3),
-                    model = bubble.Model,
-                    model_note = system.ModelNote,
-                    liquid = F(bubble.Liquid),
-                    vapor = F(bubble.Vapor),
-                    dew_liquid = F(dew.Liquid),
-                    activity_coefficients = F(bubble.ActivityCoefficients),
-                    relative_volatility = bubble.RelativeVolatilities.Select(a => new { first = a.First, second = a.Second, alpha = Json.R(a.Alpha, 4) }).ToList(),
-                    extrapolated = bubble.ExtrapolatedComponents,
-                });
+                J.Write(o, J.Obj(
+                    ("bubble_temperature_c", J.N(bubble.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
+                    ("dew_temperature_c", J.N(dew.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
+                    ("bubble_pressure_mbar", J.N(bubble.PressurePa / 100)),
+                    ("dew_pressure_mbar", J.N(dew.PressurePa / 100)),
+                    ("model", bubble.Model),
+                    ("model_note", system.ModelNote),
+                    ("liquid", F(bubble.Liquid)),
+                    ("vapor", F(bubble.Vapor)),
+                    ("dew_liquid", F(dew.Liquid)),
+                    ("activity_coefficients", F(bubble.ActivityCoefficients)),
+                    ("relative_volatility", J.Arr(bubble.RelativeVolatilities.Select(a => (JsonNode)J.Obj(("first", a.First), ("second", a.Second), ("alpha", J.N(a.Alpha, 4)))))),
+                    ("extrapolated", J.Strings(bubble.ExtrapolatedComponents))));
                 return CliApp.Ok;
             }
             o.WriteLine($"{c.Describe()}  [model: {bubble.Model}]");
@@ -79,8 +78,6 @@ internal static class MixtureCommand
         });
         return cmd;
     }
-
-    internal static Option<string?> ModelOption() => new("--model") { Description = "Activity model: unifac (default where parameters exist; falls back to ideal and says why) or ideal." };
 
     /// <summary>The pressure given to --at, or one standard atmosphere.</summary>
     internal static Pressure AtOrStandard(string? text)
@@ -105,12 +102,12 @@ internal static class AzeotropeCommand
         var first = new Argument<string>("first") { Description = "First solvent of the pair." };
         var second = new Argument<string>("second") { Description = "Second solvent of the pair." };
         var at = new Option<string?>("--at") { Description = "Pressure to search at (default 1013.25 mbar)." };
-        var model = MixtureCommand.ModelOption();
+        var model = SettingOptions.Of("model");
         var cmd = new Command("azeotrope", "Search a pair for minimum- and maximum-boiling azeotropes at a pressure.");
         cmd.Arguments.Add(first);
         cmd.Arguments.Add(second);
         cmd.Options.Add(at);
-        cmd.Options.Add(model);
+        model.AddTo(cmd);
         common.AddOutput(cmd);
         cmd.SetAction(r =>
         {
@@ -119,25 +116,24 @@ internal static class AzeotropeCommand
             Solvent a = library.Find(r.GetValue(first)!), b = library.Find(r.GetValue(second)!);
             if (ReferenceEquals(a, b)) throw new InputException("second", r.GetValue(second)!, "a solvent other than the first");
             var p = MixtureCommand.AtOrStandard(r.GetValue(at));
-            var kind = BoilingSystems.ParseModel(r.GetValue(model));
+            var kind = BoilingSystems.ParseModel(model.Read(r).Build().Model);
             var result = AzeotropeSearch.Find(MixtureComponent.FromSolvent(a), MixtureComponent.FromSolvent(b), p.Pascal, kind);
             var az = result.Azeotropes.FirstOrDefault();
             var o = r.InvocationConfiguration.Output;
             string KindWord(AzeotropeKind k) => k == AzeotropeKind.MinimumBoiling ? "minimum-boiling" : "maximum-boiling";
-            if (r.GetValue(common.Json))
+            if (common.IsJson(r))
             {
-                Json.Write(o, new
-                {
-                    azeotrope = result.Found,
-                    temperature_c = az is null ? (double?)null : Json.R(az.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3),
-                    mole_fraction = az?.MoleFractions.ToDictionary(kv => kv.Key, kv => Json.R(kv.Value, 4)),
-                    kind = az is null ? null : KindWord(az.Kind),
-                    model = result.Model,
-                    fallback_reason = result.FallbackReason,
-                    pressure_mbar = Json.R(p.Millibar, 3),
-                    pure_boiling_points_c = result.PureBoilingPointsK.ToDictionary(kv => kv.Key, kv => Json.R(kv.Value - PhysicalConstants.ZeroCelsiusK, 3)),
-                    all = result.Azeotropes.Select(x => new { temperature_c = Json.R(x.TemperatureK - PhysicalConstants.ZeroCelsiusK, 3), mole_fraction = x.MoleFractions, kind = KindWord(x.Kind) }).ToList(),
-                });
+                J.Write(o, J.Obj(
+                    ("azeotrope", result.Found),
+                    ("temperature_c", az is null ? null : J.N(az.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
+                    ("mole_fraction", az is null ? null : J.Map(az.MoleFractions, 4)),
+                    ("kind", az is null ? null : KindWord(az.Kind)),
+                    ("model", result.Model),
+                    ("fallback_reason", result.FallbackReason),
+                    ("pressure_mbar", J.N(p.Millibar)),
+                    ("pure_boiling_points_c", J.Map(result.PureBoilingPointsK.Select(kv => new KeyValuePair<string, double>(kv.Key, kv.Value - PhysicalConstants.ZeroCelsiusK)), 3)),
+                    ("all", J.Arr(result.Azeotropes.Select(x => (JsonNode)J.Obj(("temperature_c", J.N(x.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
+                        ("mole_fraction", J.Map(x.MoleFractions, 5)), ("kind", KindWord(x.Kind))))))));
                 return CliApp.Ok;
             }
             o.WriteLine($"{a.Name} + {b.Name} at {PressureUnits.Format(p, unit)}  [model: {result.Model}]");

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.Text.Json.Nodes;
 using DistillPlan.Cli.Output;
 using DistillPlan.Core;
 using DistillPlan.Core.Library;
@@ -20,24 +21,21 @@ internal static class SolventsCommand
             var library = common.LoadLibrary(r);
             var list = r.GetValue(filter) is string f ? library.Search(f) : library.Solvents;
             var o = r.InvocationConfiguration.Output;
-            static double? C(double? k) => k is double v ? Json.R(v - PhysicalConstants.ZeroCelsiusK, 2) : null;
-            if (r.GetValue(common.Json))
+            static double? C(double? k) => k is double v ? Math.Round(v - PhysicalConstants.ZeroCelsiusK, 2) : null;
+            if (common.IsJson(r))
             {
-                Json.Write(o, new
-                {
-                    files = library.Files,
-                    solvents = list.Select(s => new
-                    {
-                        name = s.Name, cas = s.Cas, aliases = s.Aliases, formula = s.Formula,
-                        molar_mass_g_per_mol = s.MolarMassGPerMol, liquid_density_kg_per_m3 = s.LiquidDensityKgPerM3,
-                        melting_point_c = C(s.MeltingPointK), normal_boiling_point_c = C(s.NormalBoilingPointK),
-                        critical_temperature_c = C(s.CriticalTemperatureK), flash_point_c = C(s.FlashPointK), autoignition_c = C(s.AutoignitionK),
-                        peroxide_class = s.PeroxideClass.ToString(), flags = s.Flags.ToString(),
-                        unifac_groups = s.UnifacGroups,
-                        curves = s.VaporPressure.Curves.Select(c => new { form = c.Form, source_key = c.Source, range_c = new[] { C(c.TMinK), C(c.TMaxK) } }).ToList(),
-                        sources = s.Sources,
-                    }).ToList(),
-                });
+                J.Write(o, J.Obj(("files", J.Strings(library.Files)),
+                    ("solvents", J.Arr(list.Select(s => (JsonNode)J.Obj(
+                        ("name", s.Name), ("cas", s.Cas), ("aliases", J.Strings(s.Aliases)), ("formula", s.Formula),
+                        ("molar_mass_g_per_mol", s.MolarMassGPerMol), ("liquid_density_kg_per_m3", J.N(s.LiquidDensityKgPerM3, 2)),
+                        ("melting_point_c", J.N(C(s.MeltingPointK), 2)), ("normal_boiling_point_c", J.N(C(s.NormalBoilingPointK), 2)),
+                        ("critical_temperature_c", J.N(C(s.CriticalTemperatureK), 2)), ("flash_point_c", J.N(C(s.FlashPointK), 2)),
+                        ("autoignition_c", J.N(C(s.AutoignitionK), 2)),
+                        ("peroxide_class", s.PeroxideClass.ToString()), ("flags", s.Flags.ToString()),
+                        ("unifac_groups", s.UnifacGroups is null ? null : J.Map(s.UnifacGroups.Select(kv => new KeyValuePair<string, double>(kv.Key.ToString(System.Globalization.CultureInfo.InvariantCulture), kv.Value)), 0)),
+                        ("curves", J.Arr(s.VaporPressure.Curves.Select(c => (JsonNode)J.Obj(("form", c.Form), ("source_key", c.Source),
+                            ("range_c", J.Arr([J.N(C(c.TMinK), 2), J.N(C(c.TMaxK), 2)])))))),
+                        ("sources", J.Obj([.. s.Sources.Select(kv => (kv.Key, J.S(kv.Value)))]))))))));
                 return CliApp.Ok;
             }
             o.WriteLine($"{"name",-26} {"CAS",-11} {"bp °C",7} {"mp °C",7} {"flash °C",8}  notes");

@@ -61,14 +61,15 @@ internal sealed class RayleighStrip
             throw new ArgumentException("the charge holds no volatile component", nameof(chargeMol));
         _dryS = (1 - DryFraction) * volatileCharge / _chargeTotal;
 
-        if (components.All(c => c.LiquidMolarVolumeM3PerMol is not null))
+        // The volume basis counts the solvents: a dissolved non-volatile product adds no solvent volume.
+        if (components.All(c => c.IsNonVolatile || c.LiquidMolarVolumeM3PerMol is not null))
         {
-            _molarVolume = components.Select(c => c.LiquidMolarVolumeM3PerMol!.Value).ToArray();
+            _molarVolume = components.Select(c => c.IsNonVolatile ? 0.0 : c.LiquidMolarVolumeM3PerMol!.Value).ToArray();
             _chargeVolume = Enumerable.Range(0, _n).Sum(i => _charge[i] * _molarVolume[i]);
         }
         else if (options.Basis == StripBasis.Volume)
         {
-            var missing = components.Where(c => c.LiquidDensityKgPerM3 is null).Select(c => c.Name);
+            var missing = components.Where(c => !c.IsNonVolatile && c.LiquidDensityKgPerM3 is null).Select(c => c.Name);
             throw new ArgumentException(
                 $"a volume basis needs every component's liquid density; missing for {string.Join(", ", missing)}",
                 nameof(options));

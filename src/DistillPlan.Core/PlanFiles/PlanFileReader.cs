@@ -1,4 +1,5 @@
-using DistillPlan.Core.Planning;
+using DistillPlan.Core.Planning.Settings;
+using DistillPlan.Core.Quantities;
 using YamlDotNet.Core;
 using YamlDotNet.RepresentationModel;
 
@@ -6,24 +7,14 @@ namespace DistillPlan.Core.PlanFiles;
 
 /// <summary>
 /// Reads a plan file (docs/plan-file.md). Strict on purpose: an unknown key is more likely a
-/// typing error than a wish, so it is refused with its line rather than silently ignored.
+/// typing error than a wish, so it is refused with its line rather than silently ignored, and
+/// every value is read by the same parser as its command-line option, with the file's line on error.
+/// The sections and keys come from the settings table (<see cref="PlanSettings"/>).
 /// </summary>
 public static class PlanFileReader
 {
-    /// <summary>The setting keys, spelt like the command-line options, with their accessors.</summary>
-    internal static readonly (string Key, Func<PlanInputs, string?> Get, Func<PlanInputs, string, PlanInputs> Set)[] Settings =
-    [
-        ("vapor-temp", i => i.VaporTemp, (i, v) => i with { VaporTemp = v }),
-        ("bath-max", i => i.BathMax, (i, v) => i with { BathMax = v }),
-        ("heating", i => i.Heating, (i, v) => i with { Heating = v }),
-        ("coolant-temp", i => i.CoolantTemp, (i, v) => i with { CoolantTemp = v }),
-        ("pump", i => i.Pump, (i, v) => i with { Pump = v }),
-        ("pump-limit", i => i.PumpLimit, (i, v) => i with { PumpLimit = v }),
-        ("atmospheric", i => i.Atmospheric, (i, v) => i with { Atmospheric = v }),
-        ("altitude", i => i.Altitude, (i, v) => i with { Altitude = v }),
-        ("delta-t", i => i.DeltaT, (i, v) => i with { DeltaT = v }),
-        ("product-max", i => i.ProductMax, (i, v) => i with { ProductMax = v }),
-    ];
+    /// <summary>The sections that hold settings, in file order.</summary>
+    internal static readonly string[] SettingSections = ["charge", "product", "settings", "strip"];
 
     /// <summary>Reads a plan file from disk.</summary>
     public static PlanDocument Load(string path)
@@ -46,59 +37,54 @@ public static class PlanFileReader
         if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode root)
             throw new PlanFileException(file, 1, $"expected a mapping that starts with 'format: {PlanDocument.FormatTag}'");
 
-        var top = Map(root, file, "format", "title", "notes", "charge", "product", "settings", "display");
-        string format = Scalar(top, "format", file, root) ?? throw new PlanFileException(file, 1, $"missing 'format: {PlanDocument.FormatTag}'");
+        var top = Map(root, file, ["format", "title", "notes", .. SettingSections, "display"]);
+        string format = Scalar(top, "format", file) ?? throw new PlanFileException(file, 1, $"missing 'format: {PlanDocument.FormatTag}'");
         if (format != PlanDocument.FormatTag)
             throw new PlanFileException(file, Line(top["format"]), $"format '{format}' is not supported; this program reads {PlanDocument.FormatTag}");
 
-        var doc = new PlanDocument
+        var doc = new PlanDocument { Title = Scalar(top, "title", file) ?? "", Notes = Scalar(top, "notes", file) ?? "" };
+        var lines = new Dictionary<string, (int Line, string Where)>();
+        var inputs = new PlanInputs();
+        foreach (string section in SettingSections)
         {
-            Title = Scalar(top, "title", file, root) ?? "",
-            Notes = Scalar(top, "notes", file, root) ?? "",
-        };
-
-        var charge = Child(top, "charge", file) ?? throw new PlanFileException(file, 1, "missing the 'charge' section with 'solvents'");
-        var c = Map(charge, file, "solvents", "basis", "model");
-        doc = doc with
-        {
-            Charge = Scalar(c, "solvents", file, charge) ?? throw new PlanFileException(file, Line(charge), "charge: missing 'solvents', e.g. solvents: ethanol=30,water=70"),
-            Basis = ReadBasis(c, file, charge),
-            Model = Scalar(c, "model", file, charge) ?? "",
-        };
-        if (doc.Model is not ("" or "unifac" or "ideal"))
-            throw new PlanFileException(file, Line(c["model"]), $"charge.model: '{doc.Model}' is not valid; expected unifac or ideal (or leave it out)");
-
-        if (Child(top, "product", file) is YamlMappingNode product)
-        {
-            var p = Map(product, file, "mass", "molar-mass");
-            doc = doc with { ProductMass = Scalar(p, "mass", file, product) ?? "", ProductMolarMass = Scalar(p, "molar-mass", file, product) ?? "" };
+            var settings = PlanSettings.All.Where(s => s.FileSection == section).ToList();
+            if (Child(top, section, file) is not YamlMappingNode node)
+            {
+                if (section == "charge") throw new PlanFileException(file, 1, "missing the 'charge' section with 'solvents'");
+                continue;
+            }
+            var keys = settings.Select(s => s.FileKey).ToList();
+            if (section == "charge") keys.Insert(0, "solvents");
+            var map = Map(node, file, keys);
+            if (section == "charge")
+                doc = doc with { Charge = Scalar(map, "solvents", file) ?? throw new PlanFileException(file, Line(node), "charge: missing 'solvents', e.g. solvents: ethanol=30,water=70") };
+            foreach (var s in settings)
+                if (Scalar(map, s.FileKey, file) is string v && v.Trim().Length > 0)
+                {
+                    inputs = inputs.With(s.Key, v);
+                    lines[s.Option] = (Line(map[s.FileKey]), $"{section}.{s.FileKey}");
+                }
         }
-
-        if (Child(top, "settings", file) is YamlMappingNode settings)
+        // Every value is read now, so a bad one is reported with its line, not later as an option.
+        try { inputs.Build(); }
+        catch (InputException e) when (lines.TryGetValue(e.Field, out var at))
         {
-            var s = Map(settings, file, Settings.Select(k => k.Key).ToArray());
-            var inputs = new PlanInputs();
-            foreach (var (key, _, set) in Settings)
-                if (Scalar(s, key, file, settings) is string v && v.Length > 0) inputs = set(inputs, v);
-            doc = doc with { Inputs = inputs };
+            throw new PlanFileException(file, at.Line, $"{at.Where}: '{e.Value}' is not valid; expected {e.Allowed}");
         }
+        doc = doc with { Inputs = inputs };
 
         if (Child(top, "display", file) is YamlMappingNode display)
         {
-            var d = Map(display, file, "pressure-unit");
-            doc = doc with { PressureUnit = Scalar(d, "pressure-unit", file, display) ?? "mbar" };
+            var d = Map(display, file, ["pressure-unit"]);
+            string unit = Scalar(d, "pressure-unit", file) ?? "mbar";
+            try { unit = PressureUnits.ForDisplay(unit).Symbol; }
+            catch (InputException e) { throw new PlanFileException(file, Line(d["pressure-unit"]), $"display.pressure-unit: '{unit}' is not valid; expected {e.Allowed}"); }
+            doc = doc with { PressureUnit = unit };
         }
         return doc;
     }
 
-    private static Basis ReadBasis(Dictionary<string, YamlNode> c, string file, YamlNode parent)
-    {
-        string word = Scalar(c, "basis", file, parent) ?? "volume";
-        try { return PlanDocument.ParseBasis(word); }
-        catch (InputException) { throw new PlanFileException(file, Line(c["basis"]), $"charge.basis: '{word}' is not valid; expected volume, mass or mole"); }
-    }
-
-    private static Dictionary<string, YamlNode> Map(YamlMappingNode node, string file, params string[] allowed)
+    private static Dictionary<string, YamlNode> Map(YamlMappingNode node, string file, IReadOnlyList<string> allowed)
     {
         var result = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
         foreach (var (k, v) in node.Children)
@@ -106,6 +92,8 @@ public static class PlanFileReader
             string key = (k as YamlScalarNode)?.Value ?? "";
             if (!allowed.Contains(key))
                 throw new PlanFileException(file, Line(k), $"unknown key '{key}'; expected one of {string.Join(", ", allowed)}");
+            if (!result.TryAdd(key, v))
+                throw new PlanFileException(file, Line(k), $"key '{key}' is given twice");
             result[key] = v;
         }
         return result;
@@ -117,7 +105,7 @@ public static class PlanFileReader
         : node is YamlScalarNode { Value: null or "" } ? null
         : throw new PlanFileException(file, Line(node), $"'{key}' must be a section of 'key: value' lines");
 
-    private static string? Scalar(Dictionary<string, YamlNode> map, string key, string file, YamlNode parent)
+    private static string? Scalar(Dictionary<string, YamlNode> map, string key, string file)
     {
         if (!map.TryGetValue(key, out var node)) return null;
         if (node is not YamlScalarNode s) throw new PlanFileException(file, Line(node), $"'{key}' must be a single value");

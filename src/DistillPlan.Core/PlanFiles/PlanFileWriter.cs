@@ -1,5 +1,5 @@
 using System.Text;
-using DistillPlan.Core.Planning;
+using DistillPlan.Core.Planning.Settings;
 
 namespace DistillPlan.Core.PlanFiles;
 
@@ -20,27 +20,20 @@ public enum SaveOutcome
 /// </summary>
 public static class PlanFileWriter
 {
-    /// <summary>The YAML text of a plan.</summary>
+    /// <summary>The YAML text of a plan: sections and keys from the settings table, given settings only.</summary>
     public static string Format(PlanDocument doc)
     {
         var o = new StringBuilder();
         o.Append("format: ").Append(PlanDocument.FormatTag).Append('\n');
         o.Append("title: ").Append(Quote(doc.Title)).Append('\n');
         if (doc.Notes.Length > 0) o.Append("notes: ").Append(Block(doc.Notes, "  ")).Append('\n');
-        o.Append("charge:\n");
-        o.Append("  solvents: ").Append(Quote(doc.Charge)).Append('\n');
-        o.Append("  basis: ").Append(PlanDocument.BasisWord(doc.Basis)).Append('\n');
-        if (doc.Model.Length > 0) o.Append("  model: ").Append(Quote(doc.Model)).Append('\n');
-        if (doc.ProductMass.Length > 0 || doc.ProductMolarMass.Length > 0)
+        foreach (string section in PlanFileReader.SettingSections)
         {
-            o.Append("product:\n");
-            if (doc.ProductMass.Length > 0) o.Append("  mass: ").Append(Quote(doc.ProductMass)).Append('\n');
-            if (doc.ProductMolarMass.Length > 0) o.Append("  molar-mass: ").Append(Quote(doc.ProductMolarMass)).Append('\n');
-        }
-        var given = PlanFileReader.Settings.Select(s => (s.Key, Value: s.Get(doc.Inputs))).Where(s => !string.IsNullOrWhiteSpace(s.Value)).ToList();
-        if (given.Count > 0)
-        {
-            o.Append("settings:\n");
+            var given = PlanSettings.All.Where(s => s.FileSection == section)
+                .Select(s => (s.FileKey, Value: doc.Inputs.Get(s.Key))).Where(s => s.Value is not null).ToList();
+            if (section == "charge") given.Insert(0, ("solvents", doc.Charge));
+            if (given.Count == 0) continue;
+            o.Append(section).Append(":\n");
             foreach (var (key, value) in given) o.Append("  ").Append(key).Append(": ").Append(Quote(value!)).Append('\n');
         }
         o.Append("display:\n  pressure-unit: ").Append(Quote(doc.PressureUnit)).Append('\n');
@@ -53,30 +46,18 @@ public static class PlanFileWriter
     /// </summary>
     public static SaveOutcome Save(string path, PlanDocument doc, Func<string, bool> confirmOverwrite)
     {
-        string full = Path.GetFullPath(path);
-        bool exists = File.Exists(full) || Directory.Exists(full);
-        if (exists && !confirmOverwrite(full)) return SaveOutcome.Declined;
-
-        string folder = Path.GetDirectoryName(full)!;
-        string temp = Path.Combine(folder, $".{Path.GetFileName(full)}.{Guid.NewGuid():N}.tmp");
         try
         {
-            using (var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write))
+            return SafeFile.Replace(path, temp =>
             {
-                byte[] bytes = new UTF8Encoding(false).GetBytes(Format(doc));
-                stream.Write(bytes);
+                using var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write);
+                stream.Write(new UTF8Encoding(false).GetBytes(Format(doc)));
                 stream.Flush(flushToDisk: true);
-            }
-            File.Move(temp, full, overwrite: exists);
-            return SaveOutcome.Saved;
+            }, confirmOverwrite, "plan file");
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        catch (InputException e) when (e is not PlanFileException)
         {
-            throw new PlanFileException(full, 0, "cannot be saved: " + e.Message);
-        }
-        finally
-        {
-            if (File.Exists(temp)) File.Delete(temp);
+            throw new PlanFileException(Path.GetFullPath(path), 0, "cannot be saved: " + e.Message);
         }
     }
 

@@ -47,8 +47,22 @@ public sealed record Equipment
     /// <summary>Room temperature at the pump exhaust, for the flash-point check.</summary>
     public Temperature Ambient { get; init; } = Temperature.FromCelsius(20);
 
-    /// <summary>Names of the fields the user set; the rest are defaults.</summary>
-    public IReadOnlySet<string> UserSet { get; init; } = new HashSet<string>();
+    /// <summary>A pump kind in words ("diaphragm pump").</summary>
+    public static string Word(PumpKind kind) => kind switch
+    {
+        PumpKind.RotaryVane => "rotary-vane pump",
+        PumpKind.Aspirator => "water aspirator",
+        PumpKind.LiquidRing => "liquid-ring pump",
+        _ => "diaphragm pump",
+    };
+
+    /// <summary>A heating medium in words ("water bath").</summary>
+    public static string Word(HeatingMedium medium) => medium switch
+    {
+        HeatingMedium.OilBath => "oil bath",
+        HeatingMedium.Jacket => "jacket",
+        _ => "water bath",
+    };
 
     /// <summary>Usual ultimate pressure of a pump kind (common practice).</summary>
     public static Pressure TypicalUltimate(PumpKind kind) => kind switch
@@ -82,6 +96,4 @@ public sealed record Rules
     public double PumpMarginFactor { get; init; } = 2.0;
     /// <summary>Highest temperature the product may see (the bath is kept at or below it).</summary>
     public Temperature? ProductMax { get; init; }
-    /// <summary>Names of the fields the user set; the rest are defaults.</summary>
-    public IReadOnlySet<string> UserSet { get; init; } = new HashSet<string>();
 }

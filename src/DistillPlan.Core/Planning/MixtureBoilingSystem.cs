@@ -35,23 +35,23 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
         new(p.TemperatureK, p.PressurePa, Components.Select(s => p.Vapor[s.Name]).ToArray(), p.ExtrapolatedComponents.Count > 0);
 
     /// <summary>
-    /// Azeotropes of every pair at a pressure. Ones closer than 0.025 mole fraction to a pure
-    /// component are left out: they change nothing a person can see, and original UNIFAC
-    /// predicts some there that do not exist (acetone–water at 0.98 acetone).
+    /// Azeotropes of every pair at a pressure, and the pairs whose search failed (with why, so
+    /// the plan can say "not evaluated" instead of dropping the check). Azeotropes closer than
+    /// 0.025 mole fraction to a pure component are left out: they change nothing a person can
+    /// see, and original UNIFAC predicts some there that do not exist (acetone–water at 0.98 acetone).
     /// </summary>
-    public IReadOnlyList<Azeotrope> Azeotropes(double pressurePa)
+    public (IReadOnlyList<Azeotrope> Found, string? Problem) Azeotropes(double pressurePa)
     {
         var found = new List<Azeotrope>();
+        var problems = new List<string>();
         var parts = Equilibrium.Components;
         for (int i = 0; i < parts.Count; i++)
             for (int j = i + 1; j < parts.Count; j++)
             {
                 var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Model == "ideal" ? ActivityModelKind.Ideal : ActivityModelKind.Unifac);
-                AzeotropeSearchResult r;
-                try { r = AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100); }
-                catch (DistillPlanException) { continue; }
-                found.AddRange(r.Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025));
+                try { found.AddRange(AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100).Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025)); }
+                catch (DistillPlanException e) { problems.Add($"{parts[i].Name}–{parts[j].Name}: {e.Message}"); }
             }
-        return found;
+        return (found, problems.Count == 0 ? null : "the azeotrope search failed for " + string.Join("; ", problems));
     }
 }

@@ -1,20 +1,16 @@
 using DistillPlan.Core.Checks;
+using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Core.Quantities;
 
 namespace DistillPlan.Core.Planning;
 
-/// <summary>One value the plan used, and whether the user set it or it is a default.</summary>
-/// <param name="Name">What it is (coolant temperature …).</param>
-/// <param name="Value">The value with its unit.</param>
-/// <param name="IsDefault">True when the user did not set it.</param>
-/// <param name="Basis">Where the default comes from (common practice, standard atmosphere …).</param>
-public sealed record Assumption(string Name, string Value, bool IsDefault, string Basis);
-
-/// <summary>Limits that cannot all be met, and what would resolve them.</summary>
-/// <param name="Constraints">The constraint codes in conflict.</param>
-/// <param name="Message">One line with the numbers.</param>
-/// <param name="Remedies">What would resolve it.</param>
-public sealed record Conflict(IReadOnlyList<string> Constraints, string Message, IReadOnlyList<string> Remedies);
+/// <summary>Limits that cannot all be met: the vapour temperature a lower bound needs and the one an upper bound allows.</summary>
+/// <param name="LowerCode">The constraint that needs a warmer vapour (coolant, pump-limit).</param>
+/// <param name="Lower">The vapour temperature it needs.</param>
+/// <param name="UpperCode">The constraint that allows at most a cooler one (bath-limit, product-limit, atmospheric-boiling-point).</param>
+/// <param name="Upper">The vapour temperature it allows.</param>
+/// <param name="Chosen">The vapour temperature the plan holds (the upper bound: safety and physics win).</param>
+public sealed record Conflict(string LowerCode, Temperature Lower, string UpperCode, Temperature Upper, Temperature Chosen);
 
 /// <summary>The setpoints for one charge on one set of equipment, with everything behind them.</summary>
 public sealed record Plan
@@ -41,18 +37,22 @@ public sealed record Plan
     public required IReadOnlyList<Pressure> Approach { get; init; }
     /// <summary>Vapour composition at the start, mole fractions in component order.</summary>
     public required double[] StartVapor { get; init; }
-    /// <summary>Limits that could not all be met.</summary>
+    /// <summary>Limits that could not all be met (each is also a finding).</summary>
     public required IReadOnlyList<Conflict> Conflicts { get; init; }
+    /// <summary>False when no setpoint satisfies every limit; the findings say what to change.</summary>
+    public bool Feasible => Conflicts.Count == 0;
     /// <summary>The checks, most severe first.</summary>
-    public required IReadOnlyList<Check> Checks { get; init; }
+    public required IReadOnlyList<Finding> Checks { get; init; }
     /// <summary>Every value the plan used, defaults marked.</summary>
     public required IReadOnlyList<Assumption> Assumptions { get; init; }
-    /// <summary>Notes on the result (mixture ramp, model fallback …).</summary>
-    public IReadOnlyList<string> Notes { get; init; } = [];
+    /// <summary>Notes on the result (mixture ramp, model fallback …), as findings of severity info.</summary>
+    public IReadOnlyList<Finding> Notes { get; init; } = [];
     /// <summary>For a mixture: the pressure ramp at the vapour temperature as the light component leaves.</summary>
-    public Mixtures.StripResult? Ramp { get; init; }
+    public StripPlan? Ramp { get; init; }
     /// <summary>The equipment planned on.</summary>
     public required Equipment Equipment { get; init; }
     /// <summary>The rules applied.</summary>
     public required Rules Rules { get; init; }
+    /// <summary>The product's maximum temperature in force (the lower of the rule's and the product's own).</summary>
+    public Temperature? ProductMax { get; init; }
 }

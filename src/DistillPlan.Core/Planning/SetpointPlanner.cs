@@ -1,19 +1,30 @@
 using DistillPlan.Core.Checks;
+using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Core.Quantities;
+using static DistillPlan.Core.Checks.F;
 
 namespace DistillPlan.Core.Planning;
 
 /// <summary>
 /// Chooses the vapour temperature, bath temperature, vacuum setpoint and condenser limit by
-/// the ΔT rule (DESIGN §2, common practice): start from the preferred vapour temperature,
-/// raise it to clear the coolant and the pump, lower it to respect the heating limit and the
-/// product, cap it at the boiling point at the local atmospheric pressure. This class is the
-/// one place each setpoint is decided.
+/// the ΔT rule (docs/methods.md, Setpoints by the ΔT rule): start from the preferred vapour
+/// temperature, raise it to clear the coolant and the pump, lower it to respect the heating
+/// limit and the product, cap it at the boiling point at the local atmospheric pressure. This
+/// class is the one place each setpoint is decided.
 /// </summary>
 public static class SetpointPlanner
 {
+    /// <summary>Builds the plan for a charge from parsed settings.</summary>
+    public static Plan Plan(Charge charge, IBoilingSystem system, PlanSetup setup) =>
+        Plan(charge, system, setup.Equipment, setup.Rules, setup.Assumptions);
+
     /// <summary>Builds the plan for a charge.</summary>
-    public static Plan Plan(Charge charge, IBoilingSystem system, Equipment equipment, Rules rules)
+    /// <param name="charge">What is evaporated.</param>
+    /// <param name="system">Its equilibrium model.</param>
+    /// <param name="equipment">The equipment.</param>
+    /// <param name="rules">The ΔT rule and limits.</param>
+    /// <param name="assumptions">The settings behind equipment and rules, as the settings table listed them.</param>
+    public static Plan Plan(Charge charge, IBoilingSystem system, Equipment equipment, Rules rules, IReadOnlyList<Assumption>? assumptions = null)
     {
         double[] x = charge.MoleFractions();
         var atmosphericBoil = system.BubbleTemperature(equipment.Atmosphere.Pascal, x);
@@ -24,17 +35,17 @@ public static class SetpointPlanner
         {
             ("coolant", equipment.Coolant + rules.VaporToCondenser),
         };
-        var pumpHold = Pressure.FromPascal(equipment.PumpUltimate.Pascal * rules.PumpMarginFactor);
+        var pumpHold = PumpHold(equipment, rules);
         if (pumpHold < equipment.Atmosphere)
             lower.Add(("pump-limit", Temperature.FromKelvin(system.BubbleTemperature(pumpHold.Pascal, x).TemperatureK)));
 
+        var productMax = ProductMax(charge, rules);
         var upper = new List<(string Code, Temperature T)>
         {
             ("bath-limit", equipment.HeatingMax - rules.BathToVapor),
             ("atmospheric-boiling-point", tbAtm),
         };
-        if (ProductMax(charge, rules) is Temperature productMax)
-            upper.Add(("product-limit", productMax - rules.BathToVapor));
+        if (productMax is Temperature pm) upper.Add(("product-limit", pm - rules.BathToVapor));
 
         var (lowCode, low) = lower.MaxBy(b => b.T.Kelvin);
         var (highCode, high) = upper.MinBy(b => b.T.Kelvin);
@@ -45,9 +56,8 @@ public static class SetpointPlanner
         if (low > high)
         {
             // Safety limits (bath, product) and physics (atmospheric boiling) win over capture and pump reach.
-            vapor = high;
-            limiting = highCode;
-            conflicts.Add(DescribeConflict(lowCode, low, highCode, high, rules));
+            (vapor, limiting) = (high, highCode);
+            conflicts.Add(new Conflict(lowCode, low, highCode, high, high));
         }
         else if (rules.PreferredVapor < low) (vapor, limiting) = (low, lowCode);
         else if (rules.PreferredVapor > high) (vapor, limiting) = (high, highCode);
@@ -60,26 +70,17 @@ public static class SetpointPlanner
         var condenserMax = vapor - rules.VaporToCondenser;
 
         var mixture = system as MixtureBoilingSystem;
-        var azeotropes = mixture?.Azeotropes(setpoint.Pascal) ?? [];
-        var context = new CheckContext(charge, system, equipment, rules, vapor, bath, setpoint, condenserMax, bubble.Vapor,
-            bubble.Extrapolated || atmosphericBoil.Extrapolated, conflicts, azeotropes);
+        var (azeotropes, azeotropeProblem) = mixture?.Azeotropes(setpoint.Pascal) ?? ([], null);
+        var context = new CheckContext(system, x, equipment, rules, vapor, bath, setpoint, condenserMax, bubble.Vapor,
+            bubble.Extrapolated || atmosphericBoil.Extrapolated, productMax, conflicts, azeotropes, azeotropeProblem);
         var checks = PlanChecks.Evaluate(context);
 
-        var notes = new List<string>();
-        if (system.ModelNote is string note) notes.Add(note);
-        var ramp = mixture is null || atmospheric ? null : StripPlanner.RampAtVaporTemperature(mixture, charge, vapor, equipment, rules);
-        if (ramp is { Steps.Count: > 1 })
-        {
-            var end = ramp.Steps[^1];
-            string heavy = end.Liquid.MaxBy(kv => kv.Value).Key;
-            notes.Add($"Hold the vapour at {vapor}: the pressure must fall from {setpoint} to {Pressure.FromPascal(end.PressurePa)} " +
-                      $"as the light component leaves ({ramp.EndMessage}); the residue is then {100 * end.Liquid[heavy]:0} mol% {heavy}.");
-        }
+        var notes = new List<Finding>();
+        if (system.ModelNote is string note) notes.Add(Make("model", Severity.Info, "", ["model"], W("note", note)));
         if (atmospheric)
-            notes.Add($"The charge boils at {tbAtm} at the local atmospheric pressure ({equipment.Atmosphere}), " +
-                      "at or below the preferred vapour temperature: no vacuum is needed; use a mild bath.");
+            notes.Add(Make("no-vacuum-needed", Severity.Info, "", ["vapor-temp"], T("boiling", tbAtm), P("atmosphere", equipment.Atmosphere)));
 
-        return new Plan
+        var plan = new Plan
         {
             Charge = charge,
             System = system,
@@ -94,16 +95,31 @@ public static class SetpointPlanner
             StartVapor = bubble.Vapor,
             Conflicts = conflicts,
             Checks = checks,
-            Assumptions = Assumptions(charge, equipment, rules),
+            Assumptions = [.. assumptions ?? [], .. FixedRules(rules)],
             Notes = notes,
-            Ramp = ramp,
             Equipment = equipment,
             Rules = rules,
+            ProductMax = productMax,
         };
+        if (mixture is null || atmospheric) return plan;
+
+        // A mixture's pressure ramp at the plan's vapour temperature, with the strip's own ends.
+        var ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: 0.1);
+        if (ramp.Steps.Count > 1)
+        {
+            var end = ramp.Steps[^1];
+            var heavy = end.Liquid.MaxBy(kv => kv.Value);
+            notes.Add(Make("pressure-ramp", Severity.Info, "", [], T("vapor", vapor), P("from", setpoint), P("to", end.Pressure),
+                W("end", ramp.EndText(Reports.DisplayFormat.Default)), (("residue_share"), Reports.Quantity.Percent(heavy.Value)), W("residue", heavy.Key)));
+        }
+        return plan with { Ramp = ramp, Notes = notes };
     }
 
+    /// <summary>The lowest pressure the pump can hold: twice its ultimate (common practice).</summary>
+    public static Pressure PumpHold(Equipment equipment, Rules rules) => Pressure.FromPascal(equipment.PumpUltimate.Pascal * rules.PumpMarginFactor);
+
     /// <summary>The product limit: the lower of the rule's and the product's own.</summary>
-    private static Temperature? ProductMax(Charge charge, Rules rules)
+    public static Temperature? ProductMax(Charge charge, Rules rules)
     {
         Temperature? fromProduct = charge.Product?.MaxTemperatureK is double k ? Temperature.FromKelvin(k) : null;
         return (rules.ProductMax, fromProduct) switch
@@ -127,44 +143,10 @@ public static class SetpointPlanner
         return Enumerable.Range(1, n).Select(i => Pressure.FromPascal(atmosphere.Pascal * Math.Pow(ratio, i))).ToList();
     }
 
-    private static Conflict DescribeConflict(string lowCode, Temperature low, string highCode, Temperature high, Rules rules)
-    {
-        string why = lowCode switch
-        {
-            "coolant" => $"the coolant needs a vapour temperature of at least {low} (coolant + {rules.VaporToCondenser})",
-            _ => $"the pump can only hold pressures that boil the charge at {low} or above",
-        };
-        string limit = highCode switch
-        {
-            "bath-limit" => $"the heating limit allows at most {high} (limit − {rules.BathToVapor})",
-            "product-limit" => $"the product's maximum temperature allows at most {high} (limit − {rules.BathToVapor})",
-            _ => $"the charge boils at {high} at atmospheric pressure",
-        };
-        var remedies = new List<string>();
-        if (lowCode == "coolant") remedies.Add("colder coolant (a chiller, or dry ice in a cold-finger condenser)");
-        else remedies.Add("a better pump (lower ultimate pressure)");
-        if (highCode == "bath-limit") remedies.Add("a heating medium with a higher limit (oil bath or jacket)");
-        if (highCode != "atmospheric-boiling-point") remedies.Add("smaller ΔT steps (--delta-t)");
-        return new Conflict([lowCode, highCode], $"{why}, but {limit}.", remedies);
-    }
-
-    private static IReadOnlyList<Assumption> Assumptions(Charge charge, Equipment e, Rules r)
-    {
-        bool D(IReadOnlySet<string> set, string key) => !set.Contains(key);
-        var list = new List<Assumption>
-        {
-            new("preferred vapour temperature", r.PreferredVapor.ToString(), D(r.UserSet, "vapor"), "ΔT rule 20/40/60 (common practice)"),
-            new("ΔT bath → vapour", r.BathToVapor.ToString(), D(r.UserSet, "delta-t"), "ΔT rule (common practice)"),
-            new("ΔT vapour → condenser", r.VaporToCondenser.ToString(), D(r.UserSet, "delta-t"), "ΔT rule (common practice)"),
-            new("coolant temperature", e.Coolant.ToString(), D(e.UserSet, "coolant"), "recirculating chiller or cold tap water (common practice)"),
-            new("pump ultimate pressure", e.PumpUltimate.ToString(), D(e.UserSet, "pump"), "chemistry diaphragm pump, 2–10 mbar (common practice)"),
-            new("pump margin", $"setpoint ≥ {r.PumpMarginFactor:0.#} × ultimate", true, "a pump cannot hold a pressure near its ultimate (common practice)"),
-            new("heating limit", e.HeatingMax.ToString(), D(e.UserSet, "bath-max"), "water bath, 95 °C (common practice)"),
-            new("atmospheric pressure", e.Atmosphere.ToString(), D(e.UserSet, "atmospheric"), "ICAO standard atmosphere at sea level"),
-            new("room temperature at the pump exhaust", e.Ambient.ToString(), true, "a laboratory at 20 °C (common practice)"),
-        };
-        if (r.ProductMax is Temperature pm) list.Add(new("product maximum temperature", pm.ToString(), false, "given by the user"));
-        if (!charge.IsPure) list.Add(new("composition", charge.Describe(), false, "given by the user"));
-        return list;
-    }
+    /// <summary>Rules the planner applies that are not settings, listed so the reader sees them.</summary>
+    private static IEnumerable<Assumption> FixedRules(Rules r) =>
+    [
+        new("pump-margin", "lowest setpoint, as a multiple of the pump's ultimate pressure", Reports.Quantity.Number(r.PumpMarginFactor, "times"), true,
+            "a pump cannot hold a pressure near its ultimate; common practice"),
+    ];
 }

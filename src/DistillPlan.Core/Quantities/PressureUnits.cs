@@ -77,8 +77,10 @@ public static class PressureUnits
     public static string Format(Pressure p, PressureUnit unit)
     {
         double value = p.Pascal / unit.Pascal;
-        // Low readings need more decimals to stay meaningful (1.2 mbar, 0.05 mbar).
+        // Low readings need more decimals to stay meaningful (1.2 mbar, 0.05 mbar); below 1 unit
+        // keep at least three significant figures so 0.0001 mbar never reads "0.000".
         int decimals = unit.Decimals + (value < 1 ? 2 : value < 10 ? 1 : 0);
+        if (value > 0 && value < 1) decimals = Math.Max(decimals, Math.Min(12, 2 - (int)Math.Floor(Math.Log10(value))));
         return value.ToString("F" + decimals, CultureInfo.InvariantCulture) + " " + unit.Symbol;
     }
 

@@ -1,5 +1,5 @@
 using System.Collections.ObjectModel;
-using DistillPlan.Core.PlanFiles;
+using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Tui.Model;
 using Terminal.Gui.Input;
 using Terminal.Gui.ViewBase;
@@ -18,7 +18,11 @@ internal sealed class ChargePane : View
     private readonly ListView _matches;
     private readonly ObservableCollection<string> _lines = [];
     private IReadOnlyList<SolventHit> _hits = [];
-    private readonly Field _charge, _basis, _model, _mass, _molar, _productMax, _title;
+    private readonly Field _charge, _title;
+    private readonly List<(string Key, Field Field)> _settings = [];
+
+    /// <summary>The settings shown under the charge.</summary>
+    private static readonly string[] ChargeSettings = ["basis", "model", "product-mass", "product-molar-mass", "product-max"];
 
     public ChargePane(PlannerViewModel vm)
     {
@@ -37,17 +41,16 @@ internal sealed class ChargePane : View
 
         _charge = new Field(this, _matches, "Charge:", 15, 40, v => vm.Edit(d => d with { Charge = v }));
         _charge.Hint.Text = "NAME=AMOUNT,...";
-        _basis = new Field(this, _charge.Caption, "Basis:", 15, 10, v => vm.Edit(d => d with { Basis = SafeBasis(v, d.Basis) }));
-        _basis.Hint.Text = "volume (default), mass, mole: what bare numbers mean";
-        _model = new Field(this, _basis.Caption, "Model:", 15, 10, v => vm.Edit(d => d with { Model = v.Trim().ToLowerInvariant() }));
-        _model.Hint.Text = "mixtures: unifac (default) or ideal";
-        _mass = new Field(this, _model.Caption, "Product mass:", 15, 10, v => vm.Edit(d => d with { ProductMass = v.Trim() }));
-        _mass.Hint.Text = "optional, non-volatile; g (or mg, kg)";
-        _molar = new Field(this, _mass.Caption, " molar mass:", 15, 10, v => vm.Edit(d => d with { ProductMolarMass = v.Trim() }));
-        _molar.Hint.Text = "g/mol";
-        _productMax = new Field(this, _molar.Caption, " max temp:", 15, 10, v => vm.Edit(d => d with { Inputs = d.Inputs with { ProductMax = v } }));
-        _productMax.Hint.Text = "highest temperature it may see; 60, 333K";
-        _title = new Field(this, _productMax.Caption, "Title:", 15, 40, v => vm.Edit(d => d with { Title = v }));
+        View above = _charge.Caption;
+        // The charge's own settings, from Core's settings table (basis, model, product, its limit).
+        foreach (string key in ChargeSettings)
+        {
+            var setting = PlanSettings.Get(key);
+            var field = new Field(this, above, setting.Caption, 15, 10, v => vm.SetSetting(key, v));
+            _settings.Add((key, field));
+            above = field.Caption;
+        }
+        _title = new Field(this, above, "Title:", 15, 40, v => vm.Edit(d => d with { Title = v }));
 
         _search.TextChanged += (_, _) => ShowMatches();
         _search.KeyDown += OnSearchKey;
@@ -65,18 +68,12 @@ internal sealed class ChargePane : View
     {
         var d = _vm.Document;
         _charge.Show(d.Charge);
-        _basis.Show(PlanDocument.BasisWord(d.Basis));
-        _model.Show(d.Model);
-        _mass.Show(d.ProductMass);
-        _molar.Show(d.ProductMolarMass);
-        _productMax.Show(d.Inputs.ProductMax ?? "");
+        foreach (var (key, field) in _settings)
+        {
+            field.Show(d.Inputs.Get(key) ?? "");
+            field.Hint.Text = _vm.DefaultFor(key);
+        }
         _title.Show(d.Title);
-    }
-
-    // A half-typed basis ("ma") keeps the previous one rather than erroring on every keystroke.
-    private static DistillPlan.Core.Planning.Basis SafeBasis(string text, DistillPlan.Core.Planning.Basis current)
-    {
-        try { return PlanDocument.ParseBasis(text); } catch (DistillPlan.Core.InputException) { return current; }
     }
 
     private void ShowMatches()

@@ -13,7 +13,7 @@ internal sealed class PlanPane : View
 {
     private readonly ListView _lines = new() { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
     private readonly ObservableCollection<string> _items = [];
-    private string _report = "";
+    private PlannerViewModel? _vm;
 
     public PlanPane()
     {
@@ -28,7 +28,7 @@ internal sealed class PlanPane : View
 
     public void Show(PlannerViewModel vm)
     {
-        _report = vm.PlanReport();
+        _vm = vm;
         Rewrap();
     }
 
@@ -36,8 +36,10 @@ internal sealed class PlanPane : View
 
     private void Rewrap()
     {
+        if (_vm is null) return;
         int width = _lines.Viewport.Width > 0 ? _lines.Viewport.Width - 1 : 78;
-        var lines = TextWrap.Lines(_report, width);
+        // The report is laid out at the pane's width by the same renderer as the CLI.
+        var lines = _vm.PlanReport(width).TrimEnd('\n').Split('\n');
         if (width == _wrappedAt && lines.SequenceEqual(_items)) return;
         _wrappedAt = width;
         _items.Clear();

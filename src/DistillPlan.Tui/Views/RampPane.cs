@@ -23,33 +23,31 @@ internal sealed class RampPane : View
         Add(_table, _graph, _note);
     }
 
-    private static string Short(string name) => name.Length <= 7 ? name : name[..6] + ".";
-
     public void Show(PlannerViewModel vm)
     {
-        var rows = vm.RampRows();
-        _table.Table = new EnumerableTableSource<RampRow>(rows, new Dictionary<string, Func<RampRow, object>>
-        {
-            ["Evap %"] = r => r.Evaporated,
-            [vm.Unit.Symbol] = r => r.Pressure,
-            ["Tv °C"] = r => r.Vapor,
-            ["Bath °C"] = r => r.Bath,
-            ["x " + Short(vm.RampKey)] = r => r.Liquid,
-            ["y " + Short(vm.RampKey)] = r => r.VaporComposition,
-        });
+        var f = vm.Display;
+        var table = vm.RampTable;
+        var columns = new Dictionary<string, Func<Core.Reports.TableRow, object>>();
+        if (table is not null)
+            foreach (var (c, i) in table.Columns.Select((c, i) => (c, i)).Where(t => !t.c.MachineOnly))
+            {
+                string unit = c.Kind == Core.Reports.QuantityKind.MoleFraction ? "" : " " + f.UnitOf(c.Kind, c.NumberUnit);
+                columns[(c.ShortHeader ?? c.Header) + unit] = r => f.FormatBare(r.Cells[i]);
+            }
+        _table.Table = new EnumerableTableSource<Core.Reports.TableRow>(table?.Rows ?? [], columns);
         _graph.Series.Clear();
         _graph.Annotations.Clear();
-        if (vm.Outcome.Ramp is not Ramp ramp || ramp.Steps.Count == 0)
+        if (vm.Outcome.Ramp is not Core.Planning.StripPlan ramp || ramp.Steps.Count == 0)
         {
-            _note.Text = vm.Outcome.Error is string e ? "No ramp: " + e : vm.Outcome.RampNote ?? vm.Outcome.Ramp?.EndReason ?? "No ramp.";
+            _note.Text = vm.Outcome.Error is string e ? "No ramp: " + e : vm.Outcome.RampNote ?? "No ramp.";
             _graph.SetNeedsDraw();
             return;
         }
-        var points = ramp.Steps.Select(s => new PointF((float)s.EvaporatedFraction, (float)Math.Log10(s.PressurePa / 100))).ToList();
+        var points = ramp.Steps.Select(s => new PointF((float)s.Evaporated, (float)Math.Log10(s.Pressure.Millibar))).ToList();
         _graph.Series.Add(new ScatterSeries { Fill = new GraphCellToRender(new Rune('o')), Points = points });
         _graph.Annotations.Add(new PathAnnotation { LineRune = new Rune('-'), Points = points, BeforeSeries = true });
         double lo = points.Min(p => p.Y), hi = points.Max(p => p.Y);
-        _graph.SetRange(0, 1, Math.Floor(lo - 0.01), Math.Max(Math.Ceiling(hi + 0.01), Math.Floor(lo - 0.01) + 1), "fraction evaporated");
-        _note.Text = $"{ramp.Method} {ramp.EndReason}";
+        _graph.SetRange(0, 1, Math.Floor(lo - 0.01), Math.Max(Math.Ceiling(hi + 0.01), Math.Floor(lo - 0.01) + 1), $"evaporated (by {ramp.Basis})");
+        _note.Text = $"Strip at {(ramp.Mode == Core.Mixtures.StripMode.FixedVaporTemperature ? ramp.Setpoints.Vapor + " vapour" : "fixed pressure")} ({ramp.Model}). Ends: {ramp.EndText(f)}.";
     }
 }

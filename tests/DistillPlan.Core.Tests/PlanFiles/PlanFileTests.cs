@@ -1,6 +1,6 @@
 using DistillPlan.Core;
 using DistillPlan.Core.PlanFiles;
-using DistillPlan.Core.Planning;
+using DistillPlan.Core.Planning.Settings;
 
 namespace DistillPlan.Core.Tests.PlanFiles;
 
@@ -16,11 +16,9 @@ public sealed class PlanFileTests : IDisposable
         Title = "Fractions \"14-22\": KV-317 \\ bench 3",
         Notes = "line one\n  indented line: with colon # and hash\n\nafter a blank line",
         Charge = "ethyl-acetate=180mL,heptane=270mL",
-        Basis = Basis.Mass,
-        Model = "ideal",
-        ProductMass = "1.4 g",
-        ProductMolarMass = "312",
-        Inputs = new PlanInputs { CoolantTemp = "5", PumpLimit = "3 mbar", DeltaT = "25,20", Altitude = "320", Heating = "oil-bath", ProductMax = "50" },
+        Inputs = PlanInputs.Of(("basis", "mass"), ("model", "ideal"), ("product-mass", "1.4 g"), ("product-molar-mass", "312"),
+            ("coolant-temp", "5"), ("pump-limit", "3 mbar"), ("delta-t", "25,20"), ("altitude", "320"), ("heating", "oil-bath"), ("product-max", "50"),
+            ("pressure", "20 mbar"), ("end", "left=10%")),
         PressureUnit = "Torr",
     };
 
@@ -93,6 +91,10 @@ public sealed class PlanFileTests : IDisposable
     [InlineData("format: distillplan-plan/1\ncharge:\n  solvents: water\n  colour: blue\n", 4, "unknown key 'colour'")]
     [InlineData("format: distillplan-plan/1\ncharge:\n  solvents: water\n  basis: litres\n", 4, "basis")]
     [InlineData("format: distillplan-plan/1\ntitle: x\n", 1, "charge")]
+    // Every value is read by its option's parser when the file is read, and blamed on its line.
+    [InlineData("format: distillplan-plan/1\ncharge:\n  solvents: water\nsettings:\n  coolant-temp: warm\n", 5, "settings.coolant-temp: 'warm'")]
+    [InlineData("format: distillplan-plan/1\ncharge:\n  solvents: water\ndisplay:\n  pressure-unit: furlongs\n", 5, "pressure-unit: 'furlongs'")]
+    [InlineData("format: distillplan-plan/1\ncharge:\n  solvents: water\nstrip:\n  end: halfway\n", 5, "strip.end")]
     // The YAML parser notices the unclosed list at the end of the text, line 3.
     [InlineData("format: distillplan-plan/1\ncharge: [1, 2\n", 3, "YAML")]
     public void A_bad_file_is_refused_with_its_line_and_the_problem(string text, int line, string fragment)
@@ -106,7 +108,7 @@ public sealed class PlanFileTests : IDisposable
     [Fact]
     public void A_product_needs_both_its_mass_and_its_molar_mass()
     {
-        var e = Assert.Throws<InputException>(() => (Full with { ProductMolarMass = "" }).BuildProduct());
+        var e = Assert.Throws<InputException>(() => Full.Inputs.With("product-molar-mass", null).Build());
         Assert.Contains("molar mass", e.Message);
     }
 
@@ -117,7 +119,7 @@ public sealed class PlanFileTests : IDisposable
     [InlineData("3", 3)]
     public void Product_mass_is_read_in_grams(string text, double grams)
     {
-        var p = (Full with { ProductMass = text }).BuildProduct()!;
+        var p = Full.Inputs.With("product-mass", text).Build().Product!;
         Assert.Equal(grams, p.MassG, 9);
         Assert.Equal(312, p.MolarMassGPerMol);
     }

@@ -1,5 +1,7 @@
 using DistillPlan.Core.Library;
 using DistillPlan.Core.Planning;
+using DistillPlan.Core.Planning.Settings;
+using DistillPlan.Core.Reports;
 
 namespace DistillPlan.Core.Tests.Planning;
 
@@ -10,9 +12,9 @@ public class SetpointPlanTests
 
     private static Plan PlanFor(string name, PlanInputs? inputs = null)
     {
-        var (equipment, rules) = (inputs ?? new PlanInputs()).Build();
+        var setup = (inputs ?? new PlanInputs()).Build();
         var charge = Charge.Pure(Library.Find(name));
-        return SetpointPlanner.Plan(charge, BoilingSystems.For(charge, null), equipment, rules);
+        return SetpointPlanner.Plan(charge, BoilingSystems.For(charge, null), setup);
     }
 
     [Fact]
@@ -31,7 +33,7 @@ public class SetpointPlanTests
     [Fact]
     public void A_product_limit_lowers_the_bath_and_the_vapour_temperature()
     {
-        var p = PlanFor("ethanol", new PlanInputs { ProductMax = "50" });
+        var p = PlanFor("ethanol", PlanInputs.Of(("product-max", "50")));
         // Bath ≤ 50 °C → vapour ≤ 30 °C; coolant 10 + 20 = 30 is still met exactly.
         Assert.Equal(30.0, p.Vapor.Celsius, 1e-9);
         Assert.Equal("product-limit", p.LimitingConstraint);
@@ -43,7 +45,7 @@ public class SetpointPlanTests
     [Fact]
     public void A_poor_pump_raises_the_vapour_temperature_of_DMSO()
     {
-        var p = PlanFor("dmso", new PlanInputs { CoolantTemp = "25", PumpLimit = "5mbar" });
+        var p = PlanFor("dmso", PlanInputs.Of(("coolant-temp", "25"), ("pump-limit", "5mbar")));
         // The pump holds 2 × 5 = 10 mbar; DMSO boils at 66.3 °C at 10 mbar by hand from Perry 2-8 DIPPR-101
         // (ln P = 56.273 − 7620.6/339.45 − 4.6279 ln 339.45 + 4.3819e−7·339.45² = 6.904 → 997 Pa).
         Assert.Equal("pump-limit", p.LimitingConstraint);
@@ -57,14 +59,17 @@ public class SetpointPlanTests
     {
         // Aspirator-grade pump (40 mbar ultimate → holds 80 mbar) on DMSO in a 95 °C water bath:
         // DMSO boils near 100 °C at 80 mbar, but the bath allows a vapour temperature of at most 75 °C.
-        var p = PlanFor("dmso", new PlanInputs { CoolantTemp = "25", PumpLimit = "40" });
+        var p = PlanFor("dmso", PlanInputs.Of(("coolant-temp", "25"), ("pump-limit", "40")));
         var conflict = Assert.Single(p.Conflicts);
-        Assert.Equal(["pump-limit", "bath-limit"], conflict.Constraints);
-        Assert.Contains(conflict.Remedies, r => r.Contains("oil bath"));
-        Assert.Contains(conflict.Remedies, r => r.Contains("better pump"));
+        Assert.Equal(("pump-limit", "bath-limit"), (conflict.LowerCode, conflict.UpperCode));
+        Assert.False(p.Feasible);
+        // Said once, as the finding of the limit that won, with both remedies.
+        var finding = Assert.Single(p.Checks, c => c.Code == "bath-limit");
+        Assert.StartsWith("Conflict", finding.Message(DisplayFormat.Default));
+        Assert.Contains("oil bath", finding.Action(DisplayFormat.Default));
+        Assert.Contains("better pump", finding.Action(DisplayFormat.Default));
         Assert.Equal(75.0, p.Vapor.Celsius, 1e-9);
         Assert.Contains(p.Checks, c => c.Code == "pump-limit");
-        Assert.Contains(p.Checks, c => c.Code == "bath-limit" && c.Message.StartsWith("Conflict"));
     }
 
     [Fact]
@@ -81,7 +86,7 @@ public class SetpointPlanTests
     [Fact]
     public void Altitude_lowers_the_atmospheric_boiling_point()
     {
-        var p = PlanFor("acetone", new PlanInputs { Altitude = "1500" });
+        var p = PlanFor("acetone", PlanInputs.Of(("altitude", "1500")));
         // 1500 m: 101325·(1 − 2.25577e−5·1500)^5.25588 = 84 556 Pa (ICAO); acetone boils near 51 °C there
         // (CRC Tb 56.1 °C at 1 atm, about −0.36 K per 10 mbar near 1 atm, from memory), above 40 °C: vacuum still needed.
         Assert.Equal(845.56, p.Equipment.Atmosphere.Millibar, 0.05);
@@ -102,7 +107,7 @@ public class SetpointPlanTests
     public void DMSO_freezes_in_a_10_C_condenser()
     {
         // DMSO melts at 291.67 K = 18.5 °C (CRC); coolant 10 °C is below it.
-        var check = Assert.Single(PlanFor("dmso", new PlanInputs { CoolantTemp = "10" }).Checks, c => c.Code == "condenser-freeze");
+        var check = Assert.Single(PlanFor("dmso", PlanInputs.Of(("coolant-temp", "10"))).Checks, c => c.Code == "condenser-freeze");
         Assert.Equal(Checks.Severity.Warning, check.Severity);
     }
 
@@ -124,9 +129,9 @@ public class SetpointPlanTests
     [Fact]
     public void Every_plan_lists_its_assumptions_with_defaults_marked()
     {
-        var p = PlanFor("toluene", new PlanInputs { CoolantTemp = "5" });
-        Assert.Contains(p.Assumptions, a => a.Name == "coolant temperature" && !a.IsDefault);
-        Assert.Contains(p.Assumptions, a => a.Name == "pump ultimate pressure" && a.IsDefault);
+        var p = PlanFor("toluene", PlanInputs.Of(("coolant-temp", "5")));
+        Assert.Contains(p.Assumptions, a => a.Label == "coolant temperature" && !a.IsDefault && a.Basis == "given");
+        Assert.Contains(p.Assumptions, a => a.Label == "pump ultimate pressure" && a.IsDefault);
     }
 
     [Fact]

@@ -1,6 +1,6 @@
 using DistillPlan.Core.Checks;
 
-namespace DistillPlan.Tui.Model;
+namespace DistillPlan.Reports;
 
 /// <summary>
 /// Severity as a word and a glyph, so it reads on a monochrome terminal, with NO_COLOR, and
@@ -18,7 +18,7 @@ public static class SeverityText
     };
 
     /// <summary>Counts by severity, most severe first, e.g. "1 DANGER, 2 WARNING"; "no checks raised" when empty.</summary>
-    public static string Summary(IEnumerable<Check> checks)
+    public static string Summary(IEnumerable<Finding> checks)
     {
         var parts = checks.GroupBy(c => c.Severity).OrderByDescending(g => g.Key)
             .Select(g => $"{g.Count()} {g.Key.ToString().ToUpperInvariant()}").ToList();

@@ -1,0 +1,45 @@
+using System.CommandLine;
+using System.Text;
+using DistillPlan.Cli.Commands;
+using DistillPlan.Core;
+using DistillPlan.Core.PlanFiles;
+using DistillPlan.Core.Reports;
+using DistillPlan.Reports;
+
+namespace DistillPlan.Cli.Output;
+
+/// <summary>Writes a report as the user asked: format, display unit, to the terminal or a file, and the plot file.</summary>
+internal static class ReportWriter
+{
+    public static void Write(ParseResult r, CommonOptions common, Report report, string? unitFallback)
+    {
+        var display = common.Display(r, unitFallback);
+        string format = common.FormatOf(r);
+        // Check every path before writing anything, so a bad --plot does not leave a half-done --output.
+        string? plot = r.GetValue(common.Plot);
+        string plotKind = plot is null ? "" : Path.GetExtension(plot).ToLowerInvariant();
+        if (plot is not null && !PlotFile.Extensions.Contains(plotKind))
+            throw new InputException("--plot", plot, "a file name ending in .svg or .png");
+        if (plot is not null && report.Plots.Count == 0)
+            throw new InputException("--plot", plot, "a verb with a curve or a ramp to draw");
+
+        string text = format switch
+        {
+            "json" => JsonReport.Render(report) + "\n",
+            "markdown" => MarkdownReport.Render(report, display),
+            "csv" => CsvReport.Render(report, display),
+            _ => TextReport.Render(report, display),
+        };
+        bool force = r.GetValue(common.Force);
+        if (r.GetValue(common.Output) is string path)
+            Save(path, "--output", force, temp => File.WriteAllText(temp, text, new UTF8Encoding(false)));
+        else r.InvocationConfiguration.Output.Write(text);
+        if (plot is not null) Save(plot, "--plot", force, temp => PlotFile.Save(report.Plots, display, temp, plotKind));
+    }
+
+    private static void Save(string path, string option, bool force, Action<string> write)
+    {
+        if (SafeFile.Replace(path, write, _ => force, option) == SaveOutcome.Declined)
+            throw new InputException(option, path, "a new file name, or --force to replace the existing file");
+    }
+}

@@ -1,0 +1,155 @@
+using System.Text;
+using System.Text.RegularExpressions;
+using DistillPlan.Core.Reports;
+
+namespace DistillPlan.Core.Checks;
+
+/// <summary>
+/// The one wording catalogue: every message and action of every finding, as a template whose
+/// {placeholders} are the finding's typed values, rendered in the reader's display unit. A new
+/// check adds its lines here; no front end words a finding itself.
+/// </summary>
+public static partial class Wording
+{
+    private sealed record Entry(string Message, string Action);
+
+    private const string BumpAction = "Flask at most half full, rotation on before vacuum, lower the pressure in the approach steps shown, use a bump trap.";
+
+    private static readonly Dictionary<string, Entry> Entries = new()
+    {
+        ["peroxide-former/severe"] = new("{solvent} forms explosive peroxides even in storage.",
+            "Do not evaporate old or untested stock; test for peroxides first, never evaporate to dryness, keep a residue; ask your safety officer before concentrating."),
+        ["peroxide-former/on-concentration"] = new("{solvent} forms peroxides that become a hazard when concentrated.",
+            "Test for peroxides before concentrating; never evaporate to dryness; keep a residue in the flask."),
+        ["peroxide-former/slow"] = new("{solvent} forms peroxides slowly.",
+            "Test old stock for peroxides before concentrating; do not evaporate to dryness."),
+
+        ["condenser-freeze/freezes"] = new("{solvent} melts at {melting_point}; the coolant at {coolant} will freeze it in the condenser and block the coil.",
+            "Set the coolant above {safe_coolant}, or expect to thaw the condenser; check the receiver flow."),
+        ["condenser-freeze/near"] = new("{solvent} melts at {melting_point}, only {margin} below the coolant at {coolant}; the coil surface may freeze over.",
+            "Keep the coolant a few kelvin warmer and watch the coil for crystals."),
+
+        ["autoignition/at-bath"] = new("The bath at {bath} is at or above the autoignition temperature of {solvent} ({autoignition}).",
+            "Do not run: vapour touching the bath or heater can ignite without a spark. Lower the bath well below the autoignition temperature."),
+        ["autoignition/near"] = new("The heating medium may reach {hottest}, within 80 % of the autoignition temperature of {solvent} ({autoignition}).",
+            "Limit the heater to well below the autoignition temperature; keep vapour away from hot plates and heating elements."),
+        ["autoignition/not-evaluated"] = new("Autoignition check not evaluated: {reason}.",
+            "Look up the autoignition temperature in the SDS and keep every heated surface well below it."),
+
+        ["flammable-exhaust/"] = new("{solvent} has a flash point of {flash_point}, below room temperature ({ambient}): the pump exhaust carries flammable vapour.",
+            "Vent the pump exhaust to extraction; keep ignition sources away; use a pump rated for flammable vapours."),
+        ["flammable-exhaust/not-evaluated"] = new("Flash-point check not evaluated: {reason}.",
+            "Look up the flash point in the SDS; until then treat the pump exhaust as flammable and vent it to extraction."),
+
+        ["toxic-vapor/"] = new("{solvent} vapour is toxic.",
+            "Exhaust the pump to extraction and work in a fume hood; see the SDS for exposure limits."),
+
+        ["bumping-risk/prone-one"] = new("{solvents} tends to bump; the bath is {superheat} above the boiling point at the setpoint.", BumpAction),
+        ["bumping-risk/prone-many"] = new("{solvents} tend to bump; the bath is {superheat} above the boiling point at the setpoint.", BumpAction),
+        ["bumping-risk/superheat"] = new("The bath is {superheat} above the boiling point at the setpoint; superheated liquid can bump.", BumpAction),
+        ["bumping-risk/pressure-step"] = new("The pressure halves or more in this step ({from} to {to}).",
+            "Lower the pressure gradually through this step; watch for bumping."),
+
+        ["condenser-breakthrough/"] = new("At the coolant temperature {coolant} the condensate's vapour pressure ({condensate_pressure}) is at or above the pressure ({pressure}): nothing condenses, the vapour goes to the pump.",
+            "Cool the condenser below {condenser_max} or raise the pressure; add a cold trap before the pump."),
+        ["condenser-breakthrough/not-evaluated"] = new("Condenser capture not evaluated: {reason}.",
+            "Watch the receiver: if little condenses, raise the pressure or cool the condenser; add a cold trap before the pump."),
+        ["solvent-loss/"] = new("Gas leaving the condenser at {coolant} carries {solvent_per_air} of solvent per g of leak air ({condensate_pressure} of {pressure} is solvent vapour).",
+            "Use colder coolant, tighten leaks, and put a cold trap before the pump."),
+
+        ["pump-limit/unreachable"] = new("The pressure {pressure} is below the pump's ultimate pressure {pump_ultimate}: the charge will not boil at {vapor}.",
+            "Use a better pump (an oil pump with a cold trap), or accept a hotter bath if the heating medium and the product allow it."),
+        ["pump-limit/close"] = new("The pressure {pressure} is close to the pump's ultimate pressure {pump_ultimate}: the pump may not hold it.",
+            "Use a better pump (an oil pump with a cold trap), or accept a hotter bath if the heating medium and the product allow it."),
+
+        ["bath-limit/held"] = new("The bath is held at the heating medium's limit ({limit}); the vapour temperature was lowered to {vapor}.",
+            "Nothing to change; a deeper vacuum does the work instead of heat."),
+        ["product-limit/held"] = new("The bath is held at the product's maximum temperature ({limit}); the vapour temperature was lowered to {vapor}.",
+            "Nothing to change; a deeper vacuum does the work instead of heat."),
+
+        ["azeotrope/minimum"] = new("{first} and {second} form a minimum-boiling azeotrope at {azeotrope_mole_fraction} mole fraction {first} ({temperature} at {pressure}){basis}; evaporation cannot take the composition past it.",
+            "The distillate comes over near the azeotrope and the residue moves towards pure {side}. Evaporation alone cannot free {other} of {side}: use a drying agent, an entrainer or a solvent swap."),
+        ["azeotrope/maximum"] = new("{first} and {second} form a maximum-boiling azeotrope at {azeotrope_mole_fraction} mole fraction {first} ({temperature} at {pressure}){basis}; evaporation cannot take the composition past it.",
+            "The excess {side} distils first; the residue moves towards the azeotrope and then boils unchanged at its higher temperature. Evaporation alone cannot remove the rest."),
+        ["azeotrope/not-evaluated"] = new("Azeotrope check not evaluated: {reason}.",
+            "Look up the pair in an azeotrope table before relying on a clean separation."),
+
+        ["extrapolated-curve/"] = new("Vapour pressure of {solvents} was extrapolated beyond the fitted range of its curves (at {vapor} or {coolant}).",
+            "Treat the setpoint as an estimate: approach it from above and watch the boiling."),
+
+        // Notes: what the plan did and why (severity info).
+        ["model/"] = new("{note}.", ""),
+        ["no-vacuum-needed/"] = new("The charge boils at {boiling} at the local atmospheric pressure ({atmosphere}), at or below the preferred vapour temperature: no vacuum is needed; use a mild bath.", ""),
+        ["pressure-ramp/"] = new("Hold the vapour at {vapor}: the pressure must fall from {from} to {to} as the light component leaves ({end}); the residue is then {residue_share} {residue}.", ""),
+        ["strip-not-computed/"] = new("The pressure ramp could not be computed: {reason}. The setpoints still stand.", ""),
+
+        // How a strip ended (StripPlanner).
+        ["strip-end/fraction-left"] = new("{left} of the charge ({basis}) is left", ""),
+        ["strip-end/minimum-residue"] = new("minimum residue reached: {left} of the charge ({basis}) is kept because {solvents} forms peroxides; do not evaporate further", ""),
+        ["strip-end/residual"] = new("{component} is down to mole fraction {reached} in the liquid (target {target})", ""),
+        ["strip-end/pump-limit"] = new("the pressure has fallen to what the pump can hold, {floor} (twice its ultimate pressure {pump_ultimate})", ""),
+        ["strip-end/temperature-limit"] = new("the boiling temperature has reached {vapor}, where the bath reaches {limit} ({bath})", ""),
+        ["strip-end/dry"] = new("practically dry: less than 1 ppm of the solvent is left", ""),
+        ["strip-end/failed"] = new("the strip stopped early: {reason}", "Treat the last steps as approximate; stop the evaporation by hand before this point."),
+    };
+
+    private static readonly Dictionary<string, string> ConflictNeeds = new()
+    {
+        ["coolant"] = "the coolant needs a vapour temperature of at least {needed} (coolant + ΔT)",
+        ["pump-limit"] = "the pump can only hold pressures that boil the charge at {needed} or above",
+    };
+
+    private static readonly Dictionary<string, string> ConflictAllows = new()
+    {
+        ["bath-limit"] = "the heating limit allows at most {allowed} (limit − ΔT)",
+        ["product-limit"] = "the product's maximum temperature allows at most {allowed} (limit − ΔT)",
+        ["atmospheric-boiling-point"] = "the charge boils at {allowed} at atmospheric pressure",
+    };
+
+    /// <summary>Every variant key the catalogue knows ("code/variant"), for tests.</summary>
+    public static IEnumerable<string> Keys => Entries.Keys.Concat(
+        from low in ConflictNeeds.Keys from high in ConflictAllows.Keys select $"{ConflictCode(low, high)}/conflict:{low}:{high}");
+
+    private static string ConflictCode(string low, string high) =>
+        high is "bath-limit" or "product-limit" ? high : low == "coolant" ? "coolant-limit" : "pump-limit";
+
+    /// <summary>The finding's message, its numbers in the display format.</summary>
+    public static string Message(Finding f, DisplayFormat format)
+    {
+        if (f.Variant.StartsWith("conflict:", StringComparison.Ordinal))
+        {
+            var parts = f.Variant.Split(':');
+            return Fill($"Conflict: {ConflictNeeds[parts[1]]}, but {ConflictAllows[parts[2]]}; the vapour is held at {{vapor}}.", f, format);
+        }
+        return Fill(Find(f).Message, f, format);
+    }
+
+    /// <summary>What to do about the finding.</summary>
+    public static string Action(Finding f, DisplayFormat format)
+    {
+        if (f.Variant.StartsWith("conflict:", StringComparison.Ordinal))
+        {
+            var parts = f.Variant.Split(':');
+            var remedies = new List<string>
+            {
+                parts[1] == "coolant" ? "colder coolant (a chiller, or dry ice in a cold-finger condenser)" : "a better pump (lower ultimate pressure)",
+            };
+            if (parts[2] == "bath-limit") remedies.Add("a heating medium with a higher limit (oil bath or jacket)");
+            if (parts[2] != "atmospheric-boiling-point") remedies.Add("smaller ΔT steps (--delta-t)");
+            return "Resolve with: " + string.Join("; or ", remedies) + ".";
+        }
+        return Fill(Find(f).Action, f, format);
+    }
+
+    private static Entry Find(Finding f) =>
+        Entries.TryGetValue(f.Code + "/" + f.Variant, out var e) ? e
+        : throw new InvalidOperationException($"no wording for finding {f.Code}/{f.Variant}");
+
+    [GeneratedRegex(@"\{([a-z_]+)\}")]
+    private static partial Regex Placeholder();
+
+    private static string Fill(string template, Finding f, DisplayFormat format) =>
+        Placeholder().Replace(template, m => f.Values.TryGetValue(m.Groups[1].Value, out var q)
+            ? format.Format(q)
+            : throw new InvalidOperationException($"finding {f.Code}/{f.Variant} has no value '{m.Groups[1].Value}'"));
+}

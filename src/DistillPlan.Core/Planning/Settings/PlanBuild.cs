@@ -1,0 +1,24 @@
+using DistillPlan.Core.Quantities;
+
+namespace DistillPlan.Core.Planning.Settings;
+
+/// <summary>The state a plan's settings are read into, setting by setting, in table order.</summary>
+internal sealed class PlanBuild
+{
+    public HashSet<string> Given { get; } = [];
+    public Equipment Equipment { get; set; } = new();
+    public Rules Rules { get; set; } = new();
+    public double? AltitudeM { get; set; }
+    public Basis Basis { get; set; } = Basis.Volume;
+    public string? Model { get; set; }
+    public double? ProductMassG { get; set; }
+    public double? ProductMolarMassGPerMol { get; set; }
+    public Pressure? StripPressure { get; set; }
+    public StripEnd StripEnd { get; set; } = StripEnd.Default;
+
+    public PlanBuild Copy()
+    {
+        var c = (PlanBuild)MemberwiseClone();
+        return c;
+    }
+}

@@ -1,0 +1,293 @@
+using System.Globalization;
+using DistillPlan.Core.Quantities;
+using DistillPlan.Core.Reports;
+
+namespace DistillPlan.Core.Planning.Settings;
+
+/// <summary>
+/// The table of every plan setting (see <see cref="PlanSetting"/>), in the order they are read:
+/// the atmosphere first (gauge readings add it), a heating medium before its limit, a pump kind
+/// before its ultimate pressure. A new setting is one entry here; the CLI option, the plan-file
+/// key, the text-UI field, the help and the assumptions row follow from it.
+/// </summary>
+public static class PlanSettings
+{
+    private const string CommonPractice = "common practice";
+
+    /// <summary>Every setting, in reading order.</summary>
+    public static IReadOnlyList<PlanSetting> All { get; } =
+    [
+        new()
+        {
+            Key = "basis", Label = "charge basis", Caption = "Basis:", Group = SettingGroup.Charge, FileSection = "charge",
+            Help = "What bare numbers in a charge mean: volume (default), mass or mole.",
+            Apply = (b, v) => b.Basis = ParseBasis(v, "--basis"),
+        },
+        new()
+        {
+            Key = "model", Label = "activity model", Caption = "Model:", Group = SettingGroup.Charge, FileSection = "charge",
+            Help = "Activity model for mixtures: unifac (default where parameters exist) or ideal.",
+            Apply = (b, v) => b.Model = ParseModel(v, "--model"),
+        },
+        new()
+        {
+            Key = "product-mass", Label = "product mass", Caption = "Product mass:", Group = SettingGroup.Charge,
+            FileSection = "product", FileKeyOverride = "mass",
+            Help = "Non-volatile product dissolved in the charge: its mass (20g, 1.5kg; bare number: g).",
+            Apply = (b, v) => b.ProductMassG = ReadMassG(v, "--product-mass"),
+        },
+        new()
+        {
+            Key = "product-molar-mass", Label = "product molar mass", Caption = " molar mass:", Group = SettingGroup.Charge,
+            FileSection = "product", FileKeyOverride = "molar-mass",
+            Help = "Molar mass of the product in g/mol (with --product-mass).",
+            Apply = (b, v) => b.ProductMolarMassGPerMol = ReadPositive(v.Replace("g/mol", "").Trim(), "--product-molar-mass", "a molar mass in g/mol above zero, e.g. 320", 1e6),
+        },
+        new()
+        {
+            Key = "atmospheric", Label = "atmospheric pressure", Caption = "Atmospheric:", Group = SettingGroup.Equipment,
+            Help = "Local atmospheric pressure (default 1013.25 mbar, sea level); or give --altitude.",
+            Apply = (b, v) =>
+            {
+                var p = PressureUnits.Parse(v, "--atmospheric", b.Equipment.Atmosphere);
+                if (p.Millibar < 500 || p.Millibar > 1100)
+                    throw new InputException("--atmospheric", v, "a barometric pressure from 500 to 1100 mbar (absolute)");
+                b.Equipment = b.Equipment with { Atmosphere = p };
+            },
+            Value = b => Quantity.Of(b.Equipment.Atmosphere),
+            DefaultBasis = _ => "ICAO standard atmosphere at sea level",
+            // An altitude is the user's statement of the atmosphere too.
+            GivenOverride = b => b.Given.Contains("atmospheric") || b.Given.Contains("altitude"),
+            GivenBasis = b => !b.Given.Contains("atmospheric") && b.AltitudeM is double h
+                ? $"ICAO standard atmosphere at the given altitude, {h.ToString("0.#", CultureInfo.InvariantCulture)} m"
+                : "given",
+        },
+        new()
+        {
+            Key = "altitude", Label = "altitude", Caption = " or altitude:", Group = SettingGroup.Equipment,
+            Help = "Altitude in metres, for the ICAO standard atmosphere (instead of --atmospheric).",
+            Apply = (b, v) =>
+            {
+                if (b.Given.Contains("atmospheric"))
+                    throw new InputException("--altitude", v, "either --atmospheric or --altitude, not both");
+                string metres = v.Trim();
+                if (metres.EndsWith('m') && !metres.EndsWith("mm", StringComparison.Ordinal)) metres = metres[..^1].Trim();
+                if (!double.TryParse(metres, NumberStyles.Float, CultureInfo.InvariantCulture, out double h))
+                    throw new InputException("--altitude", v, "an altitude in metres, e.g. 450 or 450m");
+                b.AltitudeM = h;
+                b.Equipment = b.Equipment with { Atmosphere = Pressure.AtAltitude(h) };
+            },
+        },
+        new()
+        {
+            Key = "heating", Label = "heating medium", Caption = "Heating:", Group = SettingGroup.Equipment,
+            Help = "Heating medium: water-bath (95 °C), oil-bath (180 °C) or jacket (150 °C); sets the default limit.",
+            Apply = (b, v) =>
+            {
+                var medium = v.Trim().ToLowerInvariant() switch
+                {
+                    "water-bath" or "water" => HeatingMedium.WaterBath,
+                    "oil-bath" or "oil" => HeatingMedium.OilBath,
+                    "jacket" => HeatingMedium.Jacket,
+                    _ => throw new InputException("--heating", v, "water-bath, oil-bath or jacket"),
+                };
+                b.Equipment = b.Equipment with { Heating = medium, HeatingMax = Equipment.TypicalLimit(medium) };
+            },
+            Value = b => Quantity.Words(Equipment.Word(b.Equipment.Heating)),
+            DefaultBasis = _ => "a rotary evaporator's water bath, " + CommonPractice,
+        },
+        new()
+        {
+            Key = "bath-max", Label = "heating limit", Caption = "Heating limit:", Group = SettingGroup.Equipment,
+            Help = "Highest bath or jacket temperature (default: the heating medium's usual limit, 95 °C for a water bath).",
+            Apply = (b, v) => b.Equipment = b.Equipment with { HeatingMax = ReadTemperature(v, "--bath-max", -50, 400) },
+            Value = b => Quantity.Of(b.Equipment.HeatingMax),
+            DefaultBasis = b => $"usual limit of a {Equipment.Word(b.Equipment.Heating)}, {CommonPractice}",
+        },
+        new()
+        {
+            Key = "coolant-temp", Label = "coolant temperature", Caption = "Coolant temp:", Group = SettingGroup.Equipment,
+            Help = "Coolant temperature at the condenser (default 10 °C).",
+            Apply = (b, v) => b.Equipment = b.Equipment with { Coolant = ReadTemperature(v, "--coolant-temp", -100, 60) },
+            Value = b => Quantity.Of(b.Equipment.Coolant),
+            DefaultBasis = _ => "recirculating chiller or cold tap water, " + CommonPractice,
+        },
+        new()
+        {
+            Key = "exhaust-temp", Label = "pump exhaust temperature", Caption = "Exhaust temp:", Group = SettingGroup.Equipment,
+            Help = "Temperature of the gas at the pump exhaust, for the flash-point check (default 20 °C, the room).",
+            Apply = (b, v) => b.Equipment = b.Equipment with { Ambient = ReadTemperature(v, "--exhaust-temp", -40, 150) },
+            Value = b => Quantity.Of(b.Equipment.Ambient),
+            DefaultBasis = _ => "a laboratory at 20 °C, " + CommonPractice,
+        },
+        new()
+        {
+            Key = "pump", Label = "pump", Caption = "Pump:", Group = SettingGroup.Equipment,
+            Help = "Pump kind: diaphragm (5 mbar), rotary-vane (0.05 mbar), aspirator (25 mbar), liquid-ring (35 mbar); sets the default limit.",
+            Apply = (b, v) =>
+            {
+                var kind = v.Trim().ToLowerInvariant() switch
+                {
+                    "diaphragm" => PumpKind.Diaphragm,
+                    "rotary-vane" or "oil" => PumpKind.RotaryVane,
+                    "aspirator" or "water-aspirator" => PumpKind.Aspirator,
+                    "liquid-ring" => PumpKind.LiquidRing,
+                    _ => throw new InputException("--pump", v, "diaphragm, rotary-vane, aspirator or liquid-ring"),
+                };
+                b.Equipment = b.Equipment with { Pump = kind, PumpUltimate = Equipment.TypicalUltimate(kind) };
+            },
+            Value = b => Quantity.Words(Equipment.Word(b.Equipment.Pump)),
+            DefaultBasis = _ => "a chemistry diaphragm pump, " + CommonPractice,
+        },
+        new()
+        {
+            Key = "pump-limit", Label = "pump ultimate pressure", Caption = "Pump ultimate:", Group = SettingGroup.Equipment,
+            Help = "The pump's ultimate pressure (default: the pump kind's usual value, 5 mbar for a diaphragm pump; 5mbar, 3 Torr, -0.99barg).",
+            Apply = (b, v) =>
+            {
+                var p = PressureUnits.Parse(v, "--pump-limit", b.Equipment.Atmosphere);
+                if (p >= b.Equipment.Atmosphere)
+                    throw new InputException("--pump-limit", v, $"a pressure below the local atmosphere ({b.Equipment.Atmosphere})");
+                b.Equipment = b.Equipment with { PumpUltimate = p };
+            },
+            Value = b => Quantity.Of(b.Equipment.PumpUltimate),
+            DefaultBasis = b => $"usual ultimate of a {Equipment.Word(b.Equipment.Pump)}, {CommonPractice}",
+        },
+        new()
+        {
+            Key = "vapor-temp", Label = "preferred vapour temperature", Caption = "Vapour pref.:", Group = SettingGroup.Rules,
+            Help = "Preferred vapour temperature (default 40 °C; 40, 40C, 313K, 104F).",
+            Apply = (b, v) => b.Rules = b.Rules with { PreferredVapor = ReadTemperature(v, "--vapor-temp", -80, 300) },
+            Value = b => Quantity.Of(b.Rules.PreferredVapor),
+            DefaultBasis = _ => "ΔT rule 20/40/60, " + CommonPractice,
+        },
+        new()
+        {
+            Key = "delta-t", Label = "ΔT steps (bath → vapour, vapour → condenser)", Caption = "ΔT steps:", Group = SettingGroup.Rules,
+            Help = "ΔT steps in K: one for both (20), or bath→vapour,vapour→condenser (25,20).",
+            Apply = (b, v) =>
+            {
+                string[] parts = v.Split(',', StringSplitOptions.TrimEntries);
+                if (parts.Length > 2) throw new InputException("--delta-t", v, "one step for both (20) or bath→vapour,vapour→condenser (25,20)");
+                var bath = ReadDifference(parts[0], "--delta-t");
+                var cond = parts.Length == 2 ? ReadDifference(parts[1], "--delta-t") : bath;
+                b.Rules = b.Rules with { BathToVapor = bath, VaporToCondenser = cond };
+            },
+            Value = b => Quantity.Words($"{b.Rules.BathToVapor}, {b.Rules.VaporToCondenser}"),
+            DefaultBasis = _ => "ΔT rule, " + CommonPractice,
+        },
+        new()
+        {
+            Key = "product-max", Label = "product maximum temperature", Caption = " max temp:", Group = SettingGroup.Rules,
+            Help = "Highest temperature the product may see; the bath stays at or below it.",
+            Apply = (b, v) => b.Rules = b.Rules with { ProductMax = ReadTemperature(v, "--product-max", -80, 400) },
+            Value = b => b.Rules.ProductMax is Temperature t ? Quantity.Of(t) : null,
+        },
+        new()
+        {
+            Key = "pressure", Label = "strip pressure", Caption = "Hold pressure:", Group = SettingGroup.Strip, FileSection = "strip",
+            Help = "Strip: hold this pressure and let the boiling temperature rise (default: hold the plan's vapour temperature and let the pressure fall).",
+            Apply = (b, v) => b.StripPressure = PressureUnits.Parse(v, "--pressure", b.Equipment.Atmosphere),
+        },
+        new()
+        {
+            Key = "end", Label = "strip end", Caption = "Strip end:", Group = SettingGroup.Strip, FileSection = "strip",
+            Help = "Strip: where to stop: " + StripEnd.Allowed + ". Default: what the pump can hold, or 5 % left.",
+            Apply = (b, v) => b.StripEnd = StripEnd.Parse(v),
+        },
+    ];
+
+    /// <summary>The setting with this key.</summary>
+    public static PlanSetting Get(string key) => All.FirstOrDefault(s => s.Key == key) ?? throw new ArgumentException($"no setting '{key}'", nameof(key));
+
+    /// <summary>Reads the settings the user gave into a plan setup, defaults for the rest.</summary>
+    public static PlanSetup Build(PlanInputs inputs)
+    {
+        var b = new PlanBuild();
+        foreach (var s in All)
+        {
+            if (inputs.Get(s.Key) is string text)
+            {
+                b.Given.Add(s.Key);
+                s.Apply(b, text);
+            }
+            else s.ApplyDefault(b);
+        }
+        Product? product = (b.ProductMassG, b.ProductMolarMassGPerMol) switch
+        {
+            (double m, double mm) => new Product(m, mm, null),
+            (null, null) => null,
+            (null, _) => throw new InputException("--product-mass", "", "a mass such as 2.5g when a product molar mass is given"),
+            _ => throw new InputException("--product-molar-mass", "", "a molar mass in g/mol such as 320 when a product mass is given"),
+        };
+        var assumptions = All.Select(s => (s, v: s.Value(b))).Where(t => t.v is not null)
+            .Select(t => new Assumption(t.s.Key, t.s.Label, t.v!.Value, !t.s.IsGiven(b), t.s.IsGiven(b) ? t.s.GivenBasis?.Invoke(b) ?? "given" : t.s.DefaultBasis(b)))
+            .ToList();
+        return new PlanSetup(b.Equipment, b.Rules, b.Basis, b.Model, product, new StripRequest(b.StripPressure, b.StripEnd), assumptions);
+    }
+
+    /// <summary>
+    /// What a field left empty would mean, given the other inputs: "default 5.0 mbar (usual ultimate
+    /// of a diaphragm pump …)". Shown beside text-UI fields. Bad other inputs give the plain defaults.
+    /// </summary>
+    public static string DefaultHint(PlanSetting setting, PlanInputs inputs, DisplayFormat format)
+    {
+        var b = new PlanBuild();
+        foreach (var s in All)
+        {
+            if (s == setting) break;
+            if (inputs.Get(s.Key) is string text)
+            {
+                b.Given.Add(s.Key);
+                try { s.Apply(b, text); } catch (DistillPlanException) { }
+            }
+            else s.ApplyDefault(b);
+        }
+        setting.ApplyDefault(b);
+        return setting.Value(b) is Quantity q ? $"default {format.Format(q)}" : setting.Help.Split(';', '(')[0].TrimEnd('.', ' ');
+    }
+
+    internal static Basis ParseBasis(string text, string field) => text.Trim().ToLowerInvariant() switch
+    {
+        "" or "volume" => Basis.Volume,
+        "mass" => Basis.Mass,
+        "mole" or "mol" or "molar" => Basis.Mole,
+        _ => throw new InputException(field, text, "volume, mass or mole"),
+    };
+
+    internal static string ParseModel(string text, string field) => text.Trim().ToLowerInvariant() switch
+    {
+        "unifac" => "unifac",
+        "ideal" => "ideal",
+        _ => throw new InputException(field, text, "unifac or ideal"),
+    };
+
+    private static Temperature ReadTemperature(string text, string field, double minC, double maxC)
+    {
+        var t = TemperatureUnits.Parse(text, field);
+        if (t.Celsius < minC || t.Celsius > maxC)
+            throw new InputException(field, text, $"a temperature from {minC} °C to {maxC} °C");
+        return t;
+    }
+
+    private static TemperatureDifference ReadDifference(string text, string field)
+    {
+        var d = TemperatureUnits.ParseDifference(text, field);
+        if (!(d.Kelvin > 0) || d.Kelvin > 100) throw new InputException(field, text, "a step above 0 K and at most 100 K");
+        return d;
+    }
+
+    private static double ReadMassG(string text, string field)
+    {
+        string t = text.Trim();
+        (string unit, double factor) = t.EndsWith("mg", StringComparison.Ordinal) ? ("mg", 1e-3)
+            : t.EndsWith("kg", StringComparison.Ordinal) ? ("kg", 1e3)
+            : t.EndsWith('g') ? ("g", 1.0) : ("", 1.0);
+        return factor * ReadPositive(t[..^unit.Length].Trim(), field, "a mass above zero in mg, g or kg (e.g. 20g; bare number: g)", 1e9);
+    }
+
+    private static double ReadPositive(string text, string field, string allowed, double max) =>
+        double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v) && v > 0 && v <= max
+            ? v
+            : throw new InputException(field, text, allowed);
+}

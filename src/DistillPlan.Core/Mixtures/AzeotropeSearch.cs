@@ -66,7 +66,7 @@ public static class AzeotropeSearch
     /// <param name="gridIntervals">Number of intervals of the x1 scan.</param>
     /// <param name="tolerance">Tolerance on x1 of the refinement [-].</param>
     public static AzeotropeSearchResult Find(MixtureComponent first, MixtureComponent second,
-        double pressurePa = 101325.0, ActivityModelKind requested = ActivityModelKind.Unifac,
+        double pressurePa = 101325.0, ActivityModelKind requested = ActivityModelKind.Dortmund,
         int gridIntervals = 400, double tolerance = 1e-10)
         => Find(PhaseEquilibrium.Create([first, second], requested), pressurePa, gridIntervals, tolerance);
 

@@ -49,9 +49,9 @@ public sealed class PhaseEquilibrium
     /// <summary>Creates the solver, choosing UNIFAC (or ideal, with a reason) as
     /// <see cref="ActivityModelChoice.Choose"/> does.</summary>
     /// <param name="components">Components; names must be unique.</param>
-    /// <param name="requested">Model asked for; UNIFAC by default.</param>
+    /// <param name="requested">Model asked for; modified UNIFAC (Dortmund) by default.</param>
     public static PhaseEquilibrium Create(IReadOnlyList<MixtureComponent> components,
-        ActivityModelKind requested = ActivityModelKind.Unifac)
+        ActivityModelKind requested = ActivityModelKind.Dortmund)
         => new(components, ActivityModelChoice.Choose(components, requested));
 
     /// <summary>Components in the order mole-fraction arrays use.</summary>

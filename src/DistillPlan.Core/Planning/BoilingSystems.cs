@@ -17,11 +17,9 @@ public static class BoilingSystems
         return new MixtureBoilingSystem(charge.Components.Select(c => c.Solvent).ToList(), kind);
     }
 
-    /// <summary>The activity model a user named: unifac (default) or ideal.</summary>
-    public static ActivityModelKind ParseModel(string? model) => model?.ToLowerInvariant() switch
-    {
-        null or "" or "unifac" => ActivityModelKind.Unifac,
-        "ideal" => ActivityModelKind.Ideal,
-        _ => throw new InputException("--model", model, "unifac or ideal"),
-    };
+    /// <summary>The activity model a user named: dortmund (default), unifac (original) or ideal.</summary>
+    public static ActivityModelKind ParseModel(string? model) =>
+        string.IsNullOrWhiteSpace(model) ? ActivityModelKind.Dortmund
+        : ActivityModelChoice.TryParse(model, out var kind) ? kind
+        : throw new InputException("--model", model, "dortmund, unifac or ideal");
 }

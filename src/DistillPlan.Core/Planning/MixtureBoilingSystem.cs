@@ -46,7 +46,7 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
         for (int i = 0; i < parts.Count; i++)
             for (int j = i + 1; j < parts.Count; j++)
             {
-                var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Model == "ideal" ? ActivityModelKind.Ideal : ActivityModelKind.Unifac);
+                var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Equilibrium.Model.Requested);
                 AzeotropeSearchResult r;
                 try { r = AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100); }
                 catch (DistillPlanException) { continue; }

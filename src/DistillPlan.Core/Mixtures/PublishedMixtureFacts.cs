@@ -81,6 +81,9 @@ public sealed class PublishedMixtureFacts
     /// <summary>The shipped table.</summary>
     public static PublishedMixtureFacts Shipped => ShippedTable.Value;
 
+    /// <summary>No facts at all: the models answer alone (to see what they predict).</summary>
+    public static PublishedMixtureFacts Empty { get; } = new([], []);
+
     /// <summary>Pairs that mix in all proportions over a temperature range.</summary>
     public IReadOnlyList<MiscibilityFact> Miscible { get; }
 

@@ -120,7 +120,12 @@ internal static class AzeotropeCommand
             var result = AzeotropeSearch.Find(MixtureComponent.FromSolvent(a), MixtureComponent.FromSolvent(b), p.Pascal, kind);
             var az = result.Azeotropes.FirstOrDefault();
             var o = r.InvocationConfiguration.Output;
-            string KindWord(AzeotropeKind k) => k == AzeotropeKind.MinimumBoiling ? "minimum-boiling" : "maximum-boiling";
+            string KindWord(AzeotropeKind k) => k switch
+            {
+                AzeotropeKind.MinimumBoiling => "minimum-boiling",
+                AzeotropeKind.Heterogeneous => "heterogeneous",
+                _ => "maximum-boiling",
+            };
             if (common.IsJson(r))
             {
                 J.Write(o, J.Obj(

@@ -30,7 +30,7 @@ public sealed record EquilibriumPoint
     /// <summary>Pressure [Pa].</summary>
     public required double PressurePa { get; init; }
 
-    /// <summary>Liquid mole fractions x_i [mol/mol] by component name.</summary>
+    /// <summary>Liquid mole fractions x_i [mol/mol] by component name (overall, when two liquids are present).</summary>
     public required IReadOnlyDictionary<string, double> Liquid { get; init; }
 
     /// <summary>Vapour mole fractions y_i [mol/mol] by component name (0 for a non-volatile one).</summary>
@@ -49,11 +49,31 @@ public sealed record EquilibriumPoint
     /// the validity range of their curve (empty when none, or when the curves cannot tell).</summary>
     public IReadOnlyList<string> ExtrapolatedComponents { get; init; } = [];
 
-    /// <summary>Activity model used ("unifac" or "ideal").</summary>
+    /// <summary>Activity model used ("dortmund", "unifac" or "ideal").</summary>
     public required string Model { get; init; }
 
-    /// <summary>Why ideal replaced UNIFAC, or null.</summary>
+    /// <summary>Why a less preferred model replaced the requested one, or null.</summary>
     public string? FallbackReason { get; init; }
+
+    /// <summary>Which model answered and why, in one sentence.</summary>
+    public string ModelReason { get; init; } = "";
+
+    /// <summary>Non-null when the answer is approximate whatever the model (a carboxylic acid:
+    /// vapour association not modelled).</summary>
+    public string? ApproximationNote { get; init; }
+
+    /// <summary>The liquid phases: one (the whole liquid, share 1) or two. With two liquids of a
+    /// bubble point the pot boils at the three-phase point: <see cref="Vapor"/> is in equilibrium
+    /// with both, and <see cref="ActivityCoefficients"/> and <see cref="KValues"/> refer to the first
+    /// phase (the second has the same activities).</summary>
+    public IReadOnlyList<LiquidPhase> LiquidPhases { get; init; } = [];
+
+    /// <summary>1 or 2 (0 only for a point built without phase information).</summary>
+    public int LiquidPhaseCount => LiquidPhases.Count;
+
+    /// <summary>What decided the number of liquids (models that agreed, or a published fact
+    /// that overruled them), or null for a plain one-liquid answer.</summary>
+    public string? LiquidPhaseBasis { get; init; }
 
     /// <summary>Liquid mole fractions in component order (for solvers built on this one).</summary>
     internal double[] X { get; init; } = [];

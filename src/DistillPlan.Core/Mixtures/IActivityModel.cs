@@ -20,4 +20,12 @@ public interface IActivityModel
     /// summing to 1; zeros are allowed (infinite dilution).</param>
     /// <returns>ln γ_i in component order.</returns>
     double[] LnActivityCoefficients(double temperatureK, ReadOnlySpan<double> moleFractions);
+
+    /// <summary>ln γ_i written into <paramref name="lnGamma"/> (solvers' inner loops use this to
+    /// avoid allocating; models override it when they can).</summary>
+    /// <param name="temperatureK">Temperature [K].</param>
+    /// <param name="moleFractions">Liquid mole fractions in component order.</param>
+    /// <param name="lnGamma">Destination, one entry per component.</param>
+    void LnActivityCoefficients(double temperatureK, ReadOnlySpan<double> moleFractions, Span<double> lnGamma)
+        => LnActivityCoefficients(temperatureK, moleFractions).CopyTo(lnGamma);
 }

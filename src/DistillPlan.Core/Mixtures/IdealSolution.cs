@@ -29,4 +29,8 @@ public sealed class IdealSolution : IActivityModel
                 $"expected {ComponentCount} mole fractions, got {moleFractions.Length}", nameof(moleFractions));
         return new double[ComponentCount];
     }
+
+    /// <inheritdoc />
+    public void LnActivityCoefficients(double temperatureK, ReadOnlySpan<double> moleFractions, Span<double> lnGamma)
+        => lnGamma.Clear();
 }

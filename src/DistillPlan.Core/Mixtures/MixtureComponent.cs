@@ -65,7 +65,11 @@ public sealed class MixtureComponent
         var curves = solvent.VaporPressure;
         return new MixtureComponent(solvent.Name, solvent.MolarMassGPerMol,
             t => curves.SaturationPressure(t).PressurePa, solvent.UnifacGroups, solvent.LiquidDensityKgPerM3,
-            t => curves.SaturationPressure(t).Extrapolated);
+            t => curves.SaturationPressure(t).Extrapolated)
+        {
+            Cas = string.IsNullOrWhiteSpace(solvent.Cas) ? null : solvent.Cas,
+            MeltingPointK = solvent.MeltingPointK,
+        };
     }
 
     private MixtureComponent(
@@ -119,6 +123,13 @@ public sealed class MixtureComponent
 
     /// <summary>UNIFAC (original) subgroup id → count, or null when not known.</summary>
     public IReadOnlyDictionary<int, int>? UnifacSubgroups { get; }
+
+    /// <summary>CAS registry number, or null. It keys the group assignments of modified UNIFAC
+    /// (Dortmund) and UNIFAC-LLE, and the published miscibility and azeotrope facts.</summary>
+    public string? Cas { get; init; }
+
+    /// <summary>Melting point [K], or null when not known.</summary>
+    public double? MeltingPointK { get; init; }
 
     /// <summary>Liquid density [kg/m³], or null when not known.</summary>
     public double? LiquidDensityKgPerM3 { get; }

@@ -17,7 +17,7 @@ namespace DistillPlan.Core.Mixtures;
 /// <para>Mole-fraction arguments may be amounts in any unit: they are normalised. A non-volatile
 /// component has Psat = 0: it appears in x, never in y.</para>
 /// </remarks>
-public sealed class PhaseEquilibrium
+public sealed partial class PhaseEquilibrium
 {
     /// <summary>Lowest temperature [K] the temperature solvers search.</summary>
     public const double SearchMinimumK = 100.0;
@@ -49,9 +49,9 @@ public sealed class PhaseEquilibrium
     /// <summary>Creates the solver, choosing UNIFAC (or ideal, with a reason) as
     /// <see cref="ActivityModelChoice.Choose"/> does.</summary>
     /// <param name="components">Components; names must be unique.</param>
-    /// <param name="requested">Model asked for; UNIFAC by default.</param>
+    /// <param name="requested">Model asked for; modified UNIFAC (Dortmund) by default.</param>
     public static PhaseEquilibrium Create(IReadOnlyList<MixtureComponent> components,
-        ActivityModelKind requested = ActivityModelKind.Unifac)
+        ActivityModelKind requested = ActivityModelKind.Dortmund)
         => new(components, ActivityModelChoice.Choose(components, requested));
 
     /// <summary>Components in the order mole-fraction arrays use.</summary>
@@ -77,8 +77,8 @@ public sealed class PhaseEquilibrium
     {
         var x = Normalise(liquid, nameof(liquid));
         RequireVolatile(x, "bubble pressure");
-        var (p, y, gamma) = BubblePressureCore(temperatureK, x);
-        return Point(SaturationKind.BubblePoint, temperatureK, p, x, y, gamma);
+        var (p, y, gamma, split) = BubblePressureWithPhases(temperatureK, x);
+        return Point(SaturationKind.BubblePoint, temperatureK, p, x, y, gamma, split);
     }
 
     /// <summary>Bubble temperature of a liquid at pressure P.</summary>
@@ -99,8 +99,16 @@ public sealed class PhaseEquilibrium
 
         double t = SolveTemperature(Residual, "bubble temperature", pressurePa, toleranceK, maxIterations,
             initialGuessK ?? StartingTemperature(pressurePa));
+        // One stability test at the one-liquid estimate; with two liquids, the three-phase point.
+        var split = Split(t, x);
+        if (split.IsSplit && ThreePhaseBubbleTemperature(pressurePa, x, split, toleranceK, maxIterations) is { } three)
+        {
+            var (p3, y3, gamma3) = BubblePressureCore(three.TemperatureK, three.Split.Phases[0].X);
+            return Point(SaturationKind.BubblePoint, three.TemperatureK, p3, x, y3, gamma3, three.Split);
+        }
+        if (split.IsSplit) split = Single(t, x, "one liquid: the predicted split vanishes at the three-phase temperature");
         var (p, y, gamma) = BubblePressureCore(t, x);
-        return Point(SaturationKind.BubblePoint, t, p, x, y, gamma);
+        return Point(SaturationKind.BubblePoint, t, p, x, y, gamma, split);
     }
 
     /// <summary>Bubble temperature at P, or false when the solver does not converge.</summary>
@@ -332,7 +340,8 @@ public sealed class PhaseEquilibrium
         return inverseT > 0 ? Math.Clamp(1.0 / inverseT, SearchMinimumK, SearchMaximumK) : SearchMaximumK;
     }
 
-    private EquilibriumPoint Point(SaturationKind kind, double t, double p, double[] x, double[] y, double[] gamma)
+    private EquilibriumPoint Point(SaturationKind kind, double t, double p, double[] x, double[] y, double[] gamma,
+        LiquidPhaseSplit? split = null)
     {
         var names = _components.Select(c => c.Name).ToArray();
         var k = new double[x.Length];
@@ -357,6 +366,10 @@ public sealed class PhaseEquilibrium
                 .Where(c => !c.IsNonVolatile && c.IsSaturationPressureExtrapolated(t)).Select(c => c.Name).ToList(),
             Model = Model.Name,
             FallbackReason = Model.FallbackReason,
+            ModelReason = Model.Reason,
+            ApproximationNote = Model.ApproximationNote,
+            LiquidPhases = split?.Phases ?? [Phase(x, 1.0)],
+            LiquidPhaseBasis = split?.Basis,
             X = x,
             Y = y,
         };

@@ -26,7 +26,10 @@ internal sealed class RayleighStrip
     private readonly double _dryS;
     private double _temperatureGuessK;
 
-    private sealed record Snapshot(double S, double[] U, double TemperatureK, double PressurePa, double[] X, double[] Y);
+    private sealed record Snapshot(double S, double[] U, double TemperatureK, double PressurePa, double[] X, double[] Y)
+    {
+        public IReadOnlyList<LiquidPhase> Phases { get; init; } = [];
+    }
 
     private sealed class StripEvent(string name, Func<Snapshot, double> remaining, StripEndReason? endReason,
         Func<Snapshot, string> message)
@@ -228,15 +231,16 @@ internal sealed class RayleighStrip
         for (int i = 0; i < _n; i++) liquid[i] = Math.Max(u[i], 0.0); // a trial stage may overshoot a tiny amount
         if (_mode == StripMode.FixedVaporTemperature)
         {
+            // With two liquids the vapour is the three-phase one (heteroazeotrope while both layers last).
             var x = _equilibrium.Normalise(liquid, "liquid");
-            var (p, y, _) = _equilibrium.BubblePressureCore(_setpoint, x);
-            return new Snapshot(s, u, _setpoint, p, x, y);
+            var (p, y, _, split) = _equilibrium.BubblePressureWithPhases(_setpoint, x);
+            return new Snapshot(s, u, _setpoint, p, x, y) { Phases = split.Phases };
         }
 
         var point = _equilibrium.BubbleTemperature(_setpoint, liquid,
             initialGuessK: double.IsNaN(_temperatureGuessK) ? null : _temperatureGuessK);
         _temperatureGuessK = point.TemperatureK;
-        return new Snapshot(s, u, point.TemperatureK, _setpoint, point.X, point.Y);
+        return new Snapshot(s, u, point.TemperatureK, _setpoint, point.X, point.Y) { Phases = point.LiquidPhases };
     }
 
     private double ErrorNorm(double[] u, double[] next, double[] error, double absoluteTolerance)
@@ -272,6 +276,7 @@ internal sealed class RayleighStrip
         Vapor = ByName(s.Y),
         DistillateMol = ByName(s.U[_n..]),
         ResidueMol = ByName(s.U[.._n]),
+        LiquidPhases = s.Phases,
     };
 
     private StripResult Finish(List<StripStep> reports, StripEndReason reason, string message) => new()
@@ -284,6 +289,7 @@ internal sealed class RayleighStrip
         Model = _equilibrium.Model.Name,
         FallbackReason = _equilibrium.Model.FallbackReason,
         ModelNote = _equilibrium.Model.Note,
+        ApproximationNote = _equilibrium.Model.ApproximationNote,
     };
 
     private Dictionary<string, double> ByName(double[] values)

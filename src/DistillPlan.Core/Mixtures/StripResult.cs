@@ -66,6 +66,13 @@ public sealed record StripStep
 
     /// <summary>Liquid left in the flask [mol] by name.</summary>
     public required IReadOnlyDictionary<string, double> ResidueMol { get; init; }
+
+    /// <summary>The pot's liquid phases at this point: one, or two layers (each composition and
+    /// share) while the pot is in the two-liquid region and the vapour is the heteroazeotrope's.</summary>
+    public IReadOnlyList<LiquidPhase> LiquidPhases { get; init; } = [];
+
+    /// <summary>1 or 2 (0 when not computed).</summary>
+    public int LiquidPhaseCount => LiquidPhases.Count;
 }
 
 /// <summary>Outcome of a batch strip.</summary>
@@ -89,9 +96,12 @@ public sealed record StripResult
     /// <summary>Activity model used.</summary>
     public required string Model { get; init; }
 
-    /// <summary>Why ideal replaced UNIFAC, or null.</summary>
+    /// <summary>Why a less preferred model replaced the requested one, or null.</summary>
     public string? FallbackReason { get; init; }
 
     /// <summary>Remark on the model's treatment of the components, or null.</summary>
     public string? ModelNote { get; init; }
+
+    /// <summary>Non-null when the answer is approximate (a carboxylic acid: vapour association not modelled).</summary>
+    public string? ApproximationNote { get; init; }
 }

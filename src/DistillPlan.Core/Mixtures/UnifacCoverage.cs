@@ -26,6 +26,10 @@ public sealed record UnifacCoverage(
     IReadOnlyList<int> UnknownSubgroups,
     IReadOnlyList<MissingUnifacPair> MissingPairs)
 {
+    /// <summary>The model the coverage was checked for, as a reader knows it ("UNIFAC",
+    /// "modified UNIFAC (Dortmund)", "UNIFAC-LLE").</summary>
+    public string Model { get; init; } = "UNIFAC";
+
     /// <summary>True when UNIFAC can be evaluated for every volatile component.</summary>
     public bool IsComplete =>
         ComponentsWithoutGroups.Count == 0 && UnknownSubgroups.Count == 0 && MissingPairs.Count == 0;
@@ -38,11 +42,11 @@ public sealed record UnifacCoverage(
             if (IsComplete) return null;
             var parts = new List<string>();
             if (ComponentsWithoutGroups.Count > 0)
-                parts.Add($"no UNIFAC groups for {string.Join(", ", ComponentsWithoutGroups)}");
+                parts.Add($"no {Model} groups for {string.Join(", ", ComponentsWithoutGroups)}");
             if (UnknownSubgroups.Count > 0)
-                parts.Add($"subgroup(s) {string.Join(", ", UnknownSubgroups)} not in the UNIFAC table");
+                parts.Add($"subgroup(s) {string.Join(", ", UnknownSubgroups)} not in the {Model} table");
             if (MissingPairs.Count > 0)
-                parts.Add($"no UNIFAC interaction parameter for main groups {string.Join("; ", MissingPairs)}");
+                parts.Add($"no {Model} interaction parameter for main groups {string.Join("; ", MissingPairs)}");
             return string.Join("; ", parts);
         }
     }

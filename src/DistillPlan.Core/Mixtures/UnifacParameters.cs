@@ -13,27 +13,96 @@ namespace DistillPlan.Core.Mixtures;
 /// <param name="Q">Relative van der Waals surface area Q_k [-].</param>
 public sealed record UnifacSubgroup(int Id, string Name, int MainGroup, string MainGroupName, double R, double Q);
 
+/// <summary>Which equations a UNIFAC table belongs to.</summary>
+public enum UnifacVariant
+{
+    /// <summary>Original UNIFAC (Fredenslund et al. 1975): combinatorial with r_i, ψ_mn = exp(−a_mn/T).
+    /// UNIFAC-LLE (Magnussen et al. 1981) uses the same equations with other parameters.</summary>
+    Original,
+
+    /// <summary>Modified UNIFAC (Dortmund; Weidlich and Gmehling 1987): combinatorial with r_i^(3/4),
+    /// ψ_mn = exp(−(a_mn + b_mn T + c_mn T²)/T).</summary>
+    Modified,
+}
+
+/// <summary>Temperature-dependent main-group interaction ψ_mn = exp(−(a + b T + c T²)/T).</summary>
+/// <param name="AK">a_mn [K].</param>
+/// <param name="B">b_mn [-] (0 for original UNIFAC).</param>
+/// <param name="CPerK">c_mn [1/K] (0 for original UNIFAC).</param>
+public readonly record struct UnifacInteraction(double AK, double B, double CPerK)
+{
+    /// <summary>ψ_mn [-] at <paramref name="temperatureK"/> [K].</summary>
+    /// <param name="temperatureK">Temperature [K].</param>
+    public double Psi(double temperatureK) => Math.Exp(-(AK + B * temperatureK + CPerK * temperatureK * temperatureK) / temperatureK);
+}
+
 /// <summary>
-/// A UNIFAC parameter table: subgroups (R, Q) and main-group interaction parameters a_mn [K].
-/// <see cref="Original"/> is the published original-UNIFAC table shipped with DistillPlan.
+/// A UNIFAC parameter table: subgroups (R, Q), main-group interaction parameters (a_mn [K], and for
+/// modified UNIFAC b_mn, c_mn) and, for the tables that carry them, subgroup assignments of
+/// solvents by CAS number. <see cref="Original"/>, <see cref="Dortmund"/> and <see cref="Lle"/>
+/// are the published tables shipped with DistillPlan.
 /// </summary>
 public sealed class UnifacParameters
 {
     private const string OriginalResource = "DistillPlan.Core.Mixtures.unifac-original.yaml";
-    private const string Format = "distillplan-unifac/1";
+    private const string DortmundResource = "DistillPlan.Core.Mixtures.unifac-dortmund.yaml";
+    private const string LleResource = "DistillPlan.Core.Mixtures.unifac-lle.yaml";
+    private const string FormatV1 = "distillplan-unifac/1";
+    private const string FormatV2 = "distillplan-unifac/2";
 
-    private static readonly Lazy<UnifacParameters> OriginalTable = new(LoadOriginal);
+    private static readonly Lazy<UnifacParameters> OriginalTable = new(() => Load(OriginalResource));
+    private static readonly Lazy<UnifacParameters> DortmundTable = new(() => Load(DortmundResource));
+    private static readonly Lazy<UnifacParameters> LleTable = new(() => Load(LleResource));
 
     private readonly Dictionary<int, UnifacSubgroup> _subgroups;
-    private readonly Dictionary<(int M, int N), double> _interactions;
+    private readonly Dictionary<(int M, int N), UnifacInteraction> _interactions;
+    private readonly Dictionary<string, IReadOnlyDictionary<int, int>> _assignments;
 
-    private UnifacParameters(string source, Dictionary<int, UnifacSubgroup> subgroups,
-        Dictionary<(int M, int N), double> interactions)
+    private UnifacParameters(string model, UnifacVariant variant, string source, Dictionary<int, UnifacSubgroup> subgroups,
+        Dictionary<(int M, int N), UnifacInteraction> interactions, Dictionary<string, IReadOnlyDictionary<int, int>> assignments)
     {
+        Model = model;
+        Variant = variant;
         Source = source;
         _subgroups = subgroups;
         _interactions = interactions;
+        _assignments = assignments;
     }
+
+    /// <summary>
+    /// Modified UNIFAC (Dortmund) parameters and assignments (Weidlich and Gmehling 1987 and revisions
+    /// to 2016, as compiled by DDBST), read once from the embedded resource <c>unifac-dortmund.yaml</c>.
+    /// </summary>
+    public static UnifacParameters Dortmund => DortmundTable.Value;
+
+    /// <summary>
+    /// UNIFAC-LLE parameters and assignments (Magnussen, Rasmussen, Fredenslund 1981), read once from
+    /// the embedded resource <c>unifac-lle.yaml</c>; used to confirm liquid–liquid splits.
+    /// </summary>
+    public static UnifacParameters Lle => LleTable.Value;
+
+    /// <summary>Short model name: "unifac" (original), "dortmund" or "unifac-lle".</summary>
+    public string Model { get; }
+
+    /// <summary>Which UNIFAC equations the table belongs to.</summary>
+    public UnifacVariant Variant { get; }
+
+    /// <summary>
+    /// Subgroup counts of a component for this table: the table's own assignment by CAS number
+    /// when it has one, otherwise (original UNIFAC only) the component's
+    /// <see cref="MixtureComponent.UnifacSubgroups"/>; null when unknown.
+    /// </summary>
+    /// <param name="component">The component.</param>
+    public IReadOnlyDictionary<int, int>? GroupsFor(MixtureComponent component)
+    {
+        ArgumentNullException.ThrowIfNull(component);
+        if (component.Cas is { } cas && _assignments.TryGetValue(cas, out var counts)) return counts;
+        return Model == "unifac" ? component.UnifacSubgroups : null;
+    }
+
+    /// <summary>Number of solvents with a subgroup assignment in the table (0 for original UNIFAC,
+    /// whose assignments live in the solvent library).</summary>
+    public int AssignmentCount => _assignments.Count;
 
     /// <summary>
     /// Original UNIFAC parameters (Hansen et al., Ind. Eng. Chem. Res. 30 (1991) 2352–2355, and
@@ -51,7 +120,8 @@ public sealed class UnifacParameters
     public int InteractionCount => _interactions.Count;
 
     /// <summary>
-    /// The interaction parameter a_mn [K] between main groups m and n; a_mm = 0.
+    /// The interaction parameter a_mn [K] between main groups m and n; a_mm = 0 (for modified
+    /// UNIFAC only the a part; see <see cref="TryGetInteractionParameters"/> for b and c).
     /// Returns false when the table has no parameter for the pair (the model cannot be used).
     /// </summary>
     /// <param name="m">Main group m.</param>
@@ -64,10 +134,40 @@ public sealed class UnifacParameters
             aMnK = 0.0;
             return true;
         }
-        return _interactions.TryGetValue((m, n), out aMnK);
+        bool found = _interactions.TryGetValue((m, n), out var interaction);
+        aMnK = interaction.AK;
+        return found;
     }
 
-    /// <summary>Reads a table in the <c>distillplan-unifac/1</c> YAML format.</summary>
+    /// <summary>The full interaction (a_mn, b_mn, c_mn) between main groups m and n; zero for m = n.
+    /// Returns false when the table has no parameter for the pair.</summary>
+    /// <param name="m">Main group m.</param>
+    /// <param name="n">Main group n.</param>
+    /// <param name="interaction">The parameters when found.</param>
+    public bool TryGetInteractionParameters(int m, int n, out UnifacInteraction interaction)
+    {
+        if (m == n)
+        {
+            interaction = default;
+            return true;
+        }
+        return _interactions.TryGetValue((m, n), out interaction);
+    }
+
+    /// <summary>A copy of this table with some interactions replaced (e.g. an older published set of
+    /// one pair, to reproduce a reference calculation made with it).</summary>
+    /// <param name="replacements">(m, n) → new parameters.</param>
+    public UnifacParameters WithInteractions(IReadOnlyDictionary<(int M, int N), UnifacInteraction> replacements)
+    {
+        ArgumentNullException.ThrowIfNull(replacements);
+        var copy = new Dictionary<(int M, int N), UnifacInteraction>(_interactions);
+        foreach (var (key, value) in replacements) copy[key] = value;
+        return new UnifacParameters(Model, Variant, Source + " (with replaced pairs)", _subgroups, copy, _assignments);
+    }
+
+    /// <summary>Reads a table in the <c>distillplan-unifac/1</c> YAML format (original UNIFAC,
+    /// a_mn only) or <c>distillplan-unifac/2</c> (adds <c>model</c>, <c>variant</c>, interactions
+    /// with a, b, c and an <c>assignments</c> list of [CAS, name, "subgroup count …", source]).</summary>
     /// <param name="reader">The YAML text.</param>
     /// <param name="origin">Name of the file or resource, for error messages.</param>
     /// <exception cref="FormatException">The text is not a valid table.</exception>
@@ -79,9 +179,18 @@ public sealed class UnifacParameters
             throw new FormatException($"{origin}: expected one YAML mapping");
 
         string format = Scalar(root, "format", origin);
-        if (format != Format)
-            throw new FormatException($"{origin}: format is '{format}', expected '{Format}'");
+        if (format != FormatV1 && format != FormatV2)
+            throw new FormatException($"{origin}: format is '{format}', expected '{FormatV1}' or '{FormatV2}'");
+        bool v2 = format == FormatV2;
         string source = Scalar(root, "source", origin);
+        string model = v2 ? Scalar(root, "model", origin) : "unifac";
+        if (model == "unifac-original") model = "unifac";
+        var variant = !v2 ? UnifacVariant.Original : Scalar(root, "variant", origin) switch
+        {
+            "original" => UnifacVariant.Original,
+            "modified" => UnifacVariant.Modified,
+            var other => throw new FormatException($"{origin}: variant is '{other}', expected 'original' or 'modified'"),
+        };
 
         var subgroups = new Dictionary<int, UnifacSubgroup>();
         foreach (var row in Rows(root, "subgroups", 6, origin))
@@ -94,26 +203,49 @@ public sealed class UnifacParameters
         }
 
         var mainGroups = subgroups.Values.Select(s => s.MainGroup).ToHashSet();
-        var interactions = new Dictionary<(int, int), double>();
-        foreach (var row in Rows(root, "interactions", 3, origin))
+        var interactions = new Dictionary<(int, int), UnifacInteraction>();
+        int width = variant == UnifacVariant.Modified ? 5 : 3;
+        foreach (var row in Rows(root, "interactions", width, origin))
         {
             int m = Int(row[0], origin), n = Int(row[1], origin);
             if (!mainGroups.Contains(m) || !mainGroups.Contains(n) || m == n)
                 throw new FormatException(
                     $"{origin}, line {row[0].Start.Line}: interaction ({m}, {n}) names an unknown or equal main group");
-            if (!interactions.TryAdd((m, n), Number(row[2], origin)))
+            var interaction = width == 5
+                ? new UnifacInteraction(Number(row[2], origin), Number(row[3], origin), Number(row[4], origin))
+                : new UnifacInteraction(Number(row[2], origin), 0, 0);
+            if (!interactions.TryAdd((m, n), interaction))
                 throw new FormatException($"{origin}, line {row[0].Start.Line}: interaction ({m}, {n}) listed twice");
         }
 
-        return new UnifacParameters(source, subgroups, interactions);
+        var assignments = new Dictionary<string, IReadOnlyDictionary<int, int>>();
+        if (v2 && root.Children.ContainsKey(new YamlScalarNode("assignments")))
+            foreach (var row in Rows(root, "assignments", 4, origin))
+            {
+                var cells = Text(row[2]).Split(' ', StringSplitOptions.RemoveEmptyEntries);
+                if (cells.Length == 0 || cells.Length % 2 != 0)
+                    throw new FormatException($"{origin}, line {row[0].Start.Line}: assignment needs pairs of subgroup and count");
+                var counts = new Dictionary<int, int>();
+                for (int k = 0; k < cells.Length; k += 2)
+                {
+                    if (!int.TryParse(cells[k], CultureInfo.InvariantCulture, out int id) || !subgroups.ContainsKey(id)
+                        || !int.TryParse(cells[k + 1], CultureInfo.InvariantCulture, out int count) || count <= 0)
+                        throw new FormatException($"{origin}, line {row[0].Start.Line}: '{cells[k]} {cells[k + 1]}' is not a known subgroup and a positive count");
+                    counts[id] = counts.GetValueOrDefault(id) + count;
+                }
+                if (!assignments.TryAdd(Text(row[0]), counts))
+                    throw new FormatException($"{origin}, line {row[0].Start.Line}: CAS {Text(row[0])} assigned twice");
+            }
+
+        return new UnifacParameters(model, variant, source, subgroups, interactions, assignments);
     }
 
-    private static UnifacParameters LoadOriginal()
+    private static UnifacParameters Load(string resource)
     {
-        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(OriginalResource)
-            ?? throw new InvalidOperationException($"embedded resource {OriginalResource} is missing from the build");
+        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(resource)
+            ?? throw new InvalidOperationException($"embedded resource {resource} is missing from the build");
         using var reader = new StreamReader(stream);
-        return Parse(reader, OriginalResource);
+        return Parse(reader, resource);
     }
 
     private static string Scalar(YamlMappingNode root, string key, string origin)

@@ -17,7 +17,7 @@ public interface IBoilingSystem
 {
     /// <summary>The solvents, in the order compositions use.</summary>
     IReadOnlyList<Solvent> Components { get; }
-    /// <summary>"pure", "ideal" or "unifac".</summary>
+    /// <summary>"pure", "ideal", "unifac" (original) or "dortmund".</summary>
     string Model { get; }
     /// <summary>Why the model is what it is, when it fell back (e.g. a missing UNIFAC pair).</summary>
     string? ModelNote { get; }

@@ -7,8 +7,8 @@ public static class BoilingSystems
 {
     /// <summary>
     /// A pure solvent boils at its saturation point; a mixture uses modified Raoult's law with
-    /// the requested activity model ("unifac" or "ideal"; default unifac where parameters exist,
-    /// ideal with the reason otherwise).
+    /// the requested activity model (dortmund by default, original UNIFAC where a Dortmund pair
+    /// is missing, ideal last, with the reason).
     /// </summary>
     public static IBoilingSystem For(Charge charge, string? model)
     {
@@ -17,11 +17,9 @@ public static class BoilingSystems
         return new MixtureBoilingSystem(charge.Components.Select(c => c.Solvent).ToList(), kind);
     }
 
-    /// <summary>The activity model a user named: unifac (default) or ideal.</summary>
-    public static ActivityModelKind ParseModel(string? model) => model?.ToLowerInvariant() switch
-    {
-        null or "" or "unifac" => ActivityModelKind.Unifac,
-        "ideal" => ActivityModelKind.Ideal,
-        _ => throw new InputException("--model", model, "unifac or ideal"),
-    };
+    /// <summary>The activity model a user named: dortmund (default), unifac (original) or ideal.</summary>
+    public static ActivityModelKind ParseModel(string? model) =>
+        string.IsNullOrWhiteSpace(model) ? ActivityModelKind.Dortmund
+        : ActivityModelChoice.TryParse(model, out var kind) ? kind
+        : throw new InputException("--model", model, "dortmund, unifac or ideal");
 }

@@ -48,7 +48,7 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
         for (int i = 0; i < parts.Count; i++)
             for (int j = i + 1; j < parts.Count; j++)
             {
-                var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Model == "ideal" ? ActivityModelKind.Ideal : ActivityModelKind.Unifac);
+                var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Equilibrium.Model.Requested);
                 try { found.AddRange(AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100).Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025)); }
                 catch (DistillPlanException e) { problems.Add($"{parts[i].Name}–{parts[j].Name}: {e.Message}"); }
             }

@@ -87,7 +87,7 @@ public static class StripPlanner
         return Describe(plan, result, solvents, volumes, peroxide, hold, hottestBath, options);
     }
 
-    private static string ModelOf(Plan plan) => plan.System.Model is "ideal" ? "ideal" : "unifac";
+    private static string? ModelOf(Plan plan) => plan.System is MixtureBoilingSystem m ? Mixtures.ActivityModelChoice.NameOf(m.Equilibrium.Model.Requested) : null;
 
     private static Solvent ResolveComponent(string typed, IReadOnlyList<Solvent> solvents)
     {

@@ -170,12 +170,18 @@ public static class PlanReports
         { RightLabel = "Temperature" };
     }
 
+    private static readonly Dictionary<string, string> ModelCitations = new()
+    {
+        ["unifac"] = "UNIFAC (original): Fredenslund, Jones, Prausnitz, AIChE J. 21 (1975) 1086; parameters as revised by Hansen et al., Ind. Eng. Chem. Res. 30 (1991) 2352",
+        ["dortmund"] = "modified UNIFAC (Dortmund): Weidlich, Gmehling, Ind. Eng. Chem. Res. 26 (1987) 1372; Gmehling, Li, Schiller, Ind. Eng. Chem. Res. 32 (1993) 178; parameters as published by DDBST (2016 set)",
+    };
+
     private static IReadOnlyList<SourceCitation> Sources(Plan p, ReportContext context)
     {
         var keys = p.System.Components.SelectMany(s => s.Sources.Values).Distinct().OrderBy(k => k, StringComparer.Ordinal).ToList();
         var list = keys.Select(k => new SourceCitation(k, context.Cite(k))).ToList();
-        if (p.System is MixtureBoilingSystem m && m.Model == "unifac")
-            list.Add(new SourceCitation("unifac", "UNIFAC (original): Fredenslund, Jones, Prausnitz, AIChE J. 21 (1975) 1086; parameters as revised by Hansen et al., Ind. Eng. Chem. Res. 30 (1991) 2352"));
+        if (p.System is MixtureBoilingSystem m && ModelCitations.TryGetValue(m.Model, out var cite))
+            list.Add(new SourceCitation(m.Model, cite));
         return list;
     }
 }

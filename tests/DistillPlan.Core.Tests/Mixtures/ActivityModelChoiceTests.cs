@@ -5,12 +5,60 @@ namespace DistillPlan.Core.Tests.Mixtures;
 public class ActivityModelChoiceTests
 {
     [Fact]
-    public void Unifac_is_chosen_when_every_group_pair_has_a_parameter()
+    public void Dortmund_is_chosen_by_default_when_every_group_pair_has_a_parameter()
     {
         var choice = ActivityModelChoice.Choose([TestSolvents.Ethanol, TestSolvents.Water]);
 
+        Assert.Equal("dortmund", choice.Name);
+        Assert.Null(choice.FallbackReason);
+        Assert.Contains("Dortmund", choice.Reason);
+    }
+
+    [Fact]
+    public void Original_unifac_is_chosen_when_asked_for()
+    {
+        var choice = ActivityModelChoice.Choose([TestSolvents.Ethanol, TestSolvents.Water], ActivityModelKind.Unifac);
+
         Assert.Equal("unifac", choice.Name);
         Assert.Null(choice.FallbackReason);
+    }
+
+    [Fact]
+    public void A_missing_dortmund_pair_falls_back_to_original_unifac_and_says_why()
+    {
+        // The data compilation (../shared/data/README.md) notes that modified UNIFAC has no
+        // water parameter for carbon disulfide (CS2, main group 28); original UNIFAC has one.
+        var components = new[] { TestSolvents.ByName("carbon disulfide"), TestSolvents.Water };
+
+        var choice = ActivityModelChoice.Choose(components);
+
+        Assert.Equal("unifac", choice.Name);
+        Assert.Contains("instead of modified UNIFAC (Dortmund)", choice.FallbackReason);
+        Assert.Contains("CS2", choice.FallbackReason);
+        Assert.Equal(choice.FallbackReason, choice.Reason);
+    }
+
+    [Theory]
+    [InlineData("dortmund", ActivityModelKind.Dortmund)]
+    [InlineData("UNIFAC", ActivityModelKind.Unifac)]
+    [InlineData("ideal", ActivityModelKind.Ideal)]
+    public void Model_names_parse_as_the_command_line_spells_them(string name, ActivityModelKind kind)
+    {
+        Assert.True(ActivityModelChoice.TryParse(name, out var parsed));
+        Assert.Equal(kind, parsed);
+        Assert.Equal(name.ToLowerInvariant(), ActivityModelChoice.NameOf(kind));
+        Assert.False(ActivityModelChoice.TryParse("wilson", out _));
+    }
+
+    [Fact]
+    public void A_carboxylic_acid_makes_the_answer_approximate()
+    {
+        // Acetic acid dimerises in the vapour (common knowledge of the trade); no UNIFAC variant models it.
+        var withAcid = ActivityModelChoice.Choose([TestSolvents.ByName("acetic acid"), TestSolvents.Water]);
+        var withoutAcid = ActivityModelChoice.Choose([TestSolvents.Ethanol, TestSolvents.Water]);
+
+        Assert.Contains("acetic acid", withAcid.ApproximationNote);
+        Assert.Null(withoutAcid.ApproximationNote);
     }
 
     [Fact]

@@ -16,7 +16,7 @@ public class WaterAgainstIapwsIf97Tests
     ];
 
     /// <summary>IAPWS-IF97 eq. 30: saturation pressure [Pa] at T [K], 273.15 K to 647.096 K.</summary>
-    private static double If97SaturationPressurePa(double t)
+    internal static double If97SaturationPressurePa(double t)
     {
         double theta = t + N[8] / (t - N[9]);
         double a = theta * theta + N[0] * theta + N[1];

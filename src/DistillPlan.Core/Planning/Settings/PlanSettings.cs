@@ -26,7 +26,7 @@ public static class PlanSettings
         new()
         {
             Key = "model", Label = "activity model", Caption = "Model:", Group = SettingGroup.Charge, FileSection = "charge",
-            Help = "Activity model for mixtures: unifac (default where parameters exist) or ideal.",
+            Help = "Activity model for mixtures: dortmund (modified UNIFAC, the default where it covers every pair), unifac (original UNIFAC) or ideal.",
             Apply = (b, v) => b.Model = ParseModel(v, "--model"),
         },
         new()
@@ -255,12 +255,9 @@ public static class PlanSettings
         _ => throw new InputException(field, text, "volume, mass or mole"),
     };
 
-    internal static string ParseModel(string text, string field) => text.Trim().ToLowerInvariant() switch
-    {
-        "unifac" => "unifac",
-        "ideal" => "ideal",
-        _ => throw new InputException(field, text, "unifac or ideal"),
-    };
+    internal static string ParseModel(string text, string field) =>
+        Mixtures.ActivityModelChoice.TryParse(text.Trim(), out var kind) ? Mixtures.ActivityModelChoice.NameOf(kind)
+        : throw new InputException(field, text, "dortmund, unifac or ideal");
 
     private static Temperature ReadTemperature(string text, string field, double minC, double maxC)
     {

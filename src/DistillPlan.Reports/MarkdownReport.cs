@@ -64,7 +64,6 @@ public static class MarkdownReport
     private static void WriteTable(StringBuilder o, Table t, DisplayFormat f)
     {
         var columns = t.Columns.Select((c, i) => (c, i)).Where(x => !x.c.MachineOnly).ToList();
-        o.AppendLine().AppendLine($"**{Escape(t.Title)}**").AppendLine();
         o.AppendLine("| " + string.Join(" | ", columns.Select(x => Escape(CsvReport.Header(x.c, f)))) + " |");
         o.AppendLine("|" + string.Concat(columns.Select(_ => "---:|")));
         foreach (var row in t.Rows)

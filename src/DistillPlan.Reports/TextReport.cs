@@ -24,9 +24,11 @@ public static class TextReport
             foreach (var l in n.Split('\n')) Line("  " + l, 2);
         }
         Line(r.Title);
-        foreach (var section in r.Sections)
+        foreach (var (section, k) in r.Sections.Select((s, k) => (s, k)))
         {
             Line();
+            // The first section is the headline under the title; later ones carry their heading.
+            if (k > 0) Line(section.Heading + ":");
             var rows = section.Rows.Where(x => !x.MachineOnly).ToList();
             int labelWidth = rows.Count == 0 ? 0 : rows.Max(x => x.Label.Length) + 2;
             foreach (var row in rows)
@@ -75,8 +77,6 @@ public static class TextReport
         var headers = columns.Select(t => Header(t.c, f)).ToList();
         var cells = table.Rows.Select(r => columns.Select(t => f.FormatBare(r.Cells[t.i])).ToList()).ToList();
         var widths = headers.Select((h, k) => Math.Max(h.Length, cells.Count == 0 ? 0 : cells.Max(c => c[k].Length))).ToList();
-        line("", 0);
-        line($"  {table.Title}:", 0);
         line("  " + string.Join("  ", headers.Select((h, k) => h.PadLeft(widths[k]))), 0);
         for (int r = 0; r < table.Rows.Count; r++)
         {

@@ -95,9 +95,9 @@ public static class PlanChecks
     {
         if (s.FlashPointK is not double fp)
             return s.AutoignitionK is null ? null
-                : NotEvaluated("flammable-exhaust", $"no published flash point for {s.Name}", [], W("solvent", s.Name));
+                : NotEvaluated("flammable-exhaust", $"no published flash point for {s.Name}", ["exhaust-temp"], W("solvent", s.Name));
         if (fp >= c.Equipment.Ambient.Kelvin) return null;
-        return Make("flammable-exhaust", Severity.Warning, "", [], W("solvent", s.Name), TK("flash_point", fp), T("ambient", c.Equipment.Ambient));
+        return Make("flammable-exhaust", Severity.Warning, "", ["exhaust-temp"], W("solvent", s.Name), TK("flash_point", fp), T("ambient", c.Equipment.Ambient));
     }
 
     /// <summary>toxic-vapor: vapours that must go to extraction.</summary>
@@ -138,7 +138,7 @@ public static class PlanChecks
         double mVapor = c.Components.Zip(c.VaporComposition).Sum(t => t.First.MolarMassGPerMol * t.Second);
         double perAir = mVapor / PhysicalConstants.AirMolarMassGPerMol * pCond / (p - pCond);
         if (perAir < LossWorthSaying) return null;
-        values.Add(N("solvent_per_air", perAir, "g/g"));
+        values.Add(N("solvent_per_air", perAir, "g"));
         return Make("solvent-loss", perAir >= 1 ? Severity.Warning : Severity.Caution, "", Coolant, [.. values]);
     }
 
@@ -192,7 +192,12 @@ public static class PlanChecks
         bool minimum = a.Kind == Mixtures.AzeotropeKind.MinimumBoiling;
         // Gibbs–Konovalov: at a minimum-boiling azeotrope the residue moves away from it, at a maximum towards it.
         string side = xFirst > xAz ? first : second, other = side == first ? second : first;
-        string basis = c.System.Model is "pure" or "ideal" ? "" : $" (predicted by {c.System.Model.ToUpperInvariant()})";
+        string basis = c.System.Model switch
+        {
+            "dortmund" => ", as predicted by modified UNIFAC (Dortmund)",
+            "unifac" => ", as predicted by UNIFAC",
+            _ => "",
+        };
         return Make("azeotrope", Severity.Warning, minimum ? "minimum" : "maximum", ["model"],
             W("first", first), W("second", second), X("azeotrope_mole_fraction", xAz), X("charge_mole_fraction", xFirst),
             TK("temperature", a.TemperatureK), PPa("pressure", a.PressurePa), W("basis", basis), W("side", side), W("other", other));

@@ -36,7 +36,7 @@ public static partial class Wording
         ["autoignition/not-evaluated"] = new("Autoignition check not evaluated: {reason}.",
             "Look up the autoignition temperature in the SDS and keep every heated surface well below it."),
 
-        ["flammable-exhaust/"] = new("{solvent} has a flash point of {flash_point}, below room temperature ({ambient}): the pump exhaust carries flammable vapour.",
+        ["flammable-exhaust/"] = new("{solvent} has a flash point of {flash_point}, below the pump exhaust temperature ({ambient}): the exhaust carries flammable vapour.",
             "Vent the pump exhaust to extraction; keep ignition sources away; use a pump rated for flammable vapours."),
         ["flammable-exhaust/not-evaluated"] = new("Flash-point check not evaluated: {reason}.",
             "Look up the flash point in the SDS; until then treat the pump exhaust as flammable and vent it to extraction."),
@@ -67,9 +67,9 @@ public static partial class Wording
         ["product-limit/held"] = new("The bath is held at the product's maximum temperature ({limit}); the vapour temperature was lowered to {vapor}.",
             "Nothing to change; a deeper vacuum does the work instead of heat."),
 
-        ["azeotrope/minimum"] = new("{first} and {second} form a minimum-boiling azeotrope at {azeotrope_mole_fraction} mole fraction {first} ({temperature} at {pressure}){basis}; evaporation cannot take the composition past it.",
+        ["azeotrope/minimum"] = new("{first} and {second} form a minimum-boiling azeotrope at {azeotrope_mole_fraction} mole fraction {first}, {temperature} at {pressure}{basis}; evaporation cannot take the composition past it.",
             "The distillate comes over near the azeotrope and the residue moves towards pure {side}. Evaporation alone cannot free {other} of {side}: use a drying agent, an entrainer or a solvent swap."),
-        ["azeotrope/maximum"] = new("{first} and {second} form a maximum-boiling azeotrope at {azeotrope_mole_fraction} mole fraction {first} ({temperature} at {pressure}){basis}; evaporation cannot take the composition past it.",
+        ["azeotrope/maximum"] = new("{first} and {second} form a maximum-boiling azeotrope at {azeotrope_mole_fraction} mole fraction {first}, {temperature} at {pressure}{basis}; evaporation cannot take the composition past it.",
             "The excess {side} distils first; the residue moves towards the azeotrope and then boils unchanged at its higher temperature. Evaporation alone cannot remove the rest."),
         ["azeotrope/not-evaluated"] = new("Azeotrope check not evaluated: {reason}.",
             "Look up the pair in an azeotrope table before relying on a clean separation."),

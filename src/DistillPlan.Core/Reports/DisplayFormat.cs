@@ -20,7 +20,7 @@ public sealed record DisplayFormat(PressureUnit PressureUnit)
         QuantityKind.Temperature => Temperature.FromKelvin(q.Value).ToString(),
         QuantityKind.TemperatureDifference => new TemperatureDifference(q.Value).ToString(),
         QuantityKind.Pressure => PressureUnits.Format(Pressure.FromPascal(q.Value), PressureUnit),
-        QuantityKind.Percent => (100 * q.Value).ToString(Math.Abs(q.Value) < 0.1 && q.Value != 0 ? "0.#" : "0", CultureInfo.InvariantCulture) + " %",
+        QuantityKind.Percent => (100 * q.Value).ToString("0.#", CultureInfo.InvariantCulture) + " %",
         QuantityKind.MoleFraction => q.Value.ToString("0.000", CultureInfo.InvariantCulture),
         QuantityKind.Number => Number(q.Value) + (string.IsNullOrEmpty(q.Unit) ? "" : " " + q.Unit),
         QuantityKind.Flag => q.Value != 0 ? "yes" : "no",
@@ -35,7 +35,8 @@ public sealed record DisplayFormat(PressureUnit PressureUnit)
         QuantityKind.Pressure => PressureUnits.Format(Pressure.FromPascal(q.Value), PressureUnit).Split(' ')[0],
         QuantityKind.Percent => (100 * q.Value).ToString("0.0", CultureInfo.InvariantCulture),
         QuantityKind.MoleFraction => q.Value.ToString("0.000", CultureInfo.InvariantCulture),
-        QuantityKind.Number => Number(q.Value),
+        // Bare numbers go to tables and spreadsheets: keep six significant figures.
+        QuantityKind.Number => q.Value.ToString("G6", CultureInfo.InvariantCulture),
         QuantityKind.Flag => q.Value != 0 ? "yes" : "no",
         _ => q.Text ?? "",
     };

@@ -24,7 +24,7 @@ public static class PlanReports
         };
         var sections = new List<Section> { new("Setpoints", setpoints, []) };
         if (p.Ramp is StripPlan ramp && ramp.Steps.Count > 1)
-            sections.Add(new Section("Pressure ramp", [new("Ends", Quantity.Words(ramp.EndText(DisplayFormat.Default)), null) { MachineOnly = true }], [StepsTable(ramp, "ramp")]));
+            sections.Add(new Section("Pressure ramp", [], [StepsTable(ramp, "ramp")]));
 
         var header = new List<Row>
         {
@@ -86,7 +86,7 @@ public static class PlanReports
             Program = context.Program,
             Made = context.Made,
             Inputs = context.Inputs,
-            Sections = [new("How it runs", how, [StepsTable(s, "steps")])],
+            Sections = [new("How it runs", how, []), new("Steps", [], [StepsTable(s, "steps")])],
             Checks = s.Findings,
             Notes = [.. p.Notes.Where(n => n.Code != "pressure-ramp"), s.End],
             Assumptions = p.Assumptions,
@@ -106,7 +106,7 @@ public static class PlanReports
         bool mixture = names.Count > 1;
         var columns = new List<Column>
         {
-            new($"Evaporated (by {s.Basis})", QuantityKind.Percent, "evaporated_fraction") { ShortHeader = "Evap." },
+            new($"Evaporated by {s.Basis}", QuantityKind.Percent, "evaporated_fraction") { ShortHeader = "Evap." },
             new("Pressure", QuantityKind.Pressure, "pressure") { ShortHeader = "P" },
             new("Vapour temperature", QuantityKind.Temperature, "vapor_temperature") { ShortHeader = "Vapour" },
             new("Bath temperature", QuantityKind.Temperature, "bath_temperature") { ShortHeader = "Bath" },
@@ -124,7 +124,7 @@ public static class PlanReports
                 .. all.Select(n => Quantity.Number(st.DistillateMol[n], "mol")),
                 .. all.Select(n => Quantity.Number(st.ResidueMol[n], "mol")),
             ], st.Findings)).ToList();
-        return new Table("Steps", jsonKey, columns, rows);
+        return new Table(jsonKey, columns, rows);
     }
 
     private static string Short(string name) => name.Length <= 8 ? name : name[..7] + ".";
@@ -160,7 +160,7 @@ public static class PlanReports
     private static Plot RampPlot(StripPlan s)
     {
         var x = s.Steps.Select(st => Quantity.Percent(st.Evaporated)).ToList();
-        return new Plot("Strip: pressure and temperature", $"Evaporated (by {s.Basis})", QuantityKind.Percent, "Pressure", QuantityKind.Pressure, LogY: true,
+        return new Plot("Strip: pressure and temperature", $"Evaporated by {s.Basis}", QuantityKind.Percent, "Pressure", QuantityKind.Pressure, LogY: true,
             [
                 new("pressure", x, s.Steps.Select(st => Quantity.Of(st.Pressure)).ToList()),
                 new("vapour temperature", x, s.Steps.Select(st => Quantity.Of(st.Vapor)).ToList(), OnRightAxis: true),

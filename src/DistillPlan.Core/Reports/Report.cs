@@ -47,12 +47,11 @@ public sealed record Column(string Header, QuantityKind Kind, string JsonKey, st
 /// <param name="Findings">Findings at this row (a strip step's checks).</param>
 public sealed record TableRow(IReadOnlyList<Quantity> Cells, IReadOnlyList<Finding> Findings);
 
-/// <summary>A table (the strip's steps).</summary>
-/// <param name="Title">Heading.</param>
+/// <summary>A table (the strip's steps); its section gives the heading.</summary>
 /// <param name="JsonKey">Name of the list in JSON ("steps").</param>
 /// <param name="Columns">Columns.</param>
 /// <param name="Rows">Rows.</param>
-public sealed record Table(string Title, string JsonKey, IReadOnlyList<Column> Columns, IReadOnlyList<TableRow> Rows);
+public sealed record Table(string JsonKey, IReadOnlyList<Column> Columns, IReadOnlyList<TableRow> Rows);
 
 /// <summary>A part of a report with a heading: rows, then tables.</summary>
 /// <param name="Heading">Heading.</param>

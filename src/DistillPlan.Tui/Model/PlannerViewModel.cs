@@ -131,7 +131,7 @@ public sealed class PlannerViewModel
         {
             (var charge, setup) = doc.Build(Library);
             plan = SetpointPlanner.Plan(charge, BoilingSystems.For(charge, setup.Model), setup);
-            context = new ReportContext(doc.InputList(), Library.Cite) { UserTitle = doc.Title, UserNotes = doc.Notes, Made = Clock ?? DateTimeOffset.UtcNow };
+            context = new ReportContext(doc.InputList(), Library.Cite) { UserTitle = doc.Title, UserNotes = doc.Notes, Made = Clock ?? ReportContext.Now() };
         }
         catch (DistillPlanException e) { return PlanOutcome.Failed(e.Message); }
         catch (Exception e) when (e is ArithmeticException or ArgumentException or InvalidOperationException)

@@ -102,7 +102,7 @@ public static class PlanSettings
             Help = "Highest bath or jacket temperature (default: the heating medium's usual limit, 95 °C for a water bath).",
             Apply = (b, v) => b.Equipment = b.Equipment with { HeatingMax = ReadTemperature(v, "--bath-max", -50, 400) },
             Value = b => Quantity.Of(b.Equipment.HeatingMax),
-            DefaultBasis = b => $"usual limit of a {Equipment.Word(b.Equipment.Heating)}, {CommonPractice}",
+            DefaultBasis = b => $"usual limit for the {Equipment.Word(b.Equipment.Heating)}, {CommonPractice}",
         },
         new()
         {
@@ -151,7 +151,7 @@ public static class PlanSettings
                 b.Equipment = b.Equipment with { PumpUltimate = p };
             },
             Value = b => Quantity.Of(b.Equipment.PumpUltimate),
-            DefaultBasis = b => $"usual ultimate of a {Equipment.Word(b.Equipment.Pump)}, {CommonPractice}",
+            DefaultBasis = b => $"usual ultimate of the {Equipment.Word(b.Equipment.Pump)}, {CommonPractice}",
         },
         new()
         {

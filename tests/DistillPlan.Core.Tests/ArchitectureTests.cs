@@ -6,7 +6,7 @@ public class ArchitectureTests
     [Fact]
     public void Core_references_no_front_end_and_no_renderer()
     {
-        var references = typeof(Planning.Plan).Assembly.GetReferencedAssemblies().Select(a => a.Name!).ToList();
+        var references = typeof(DistillPlan.Core.Planning.Plan).Assembly.GetReferencedAssemblies().Select(a => a.Name!).ToList();
         string[] forbidden = ["DistillPlan.Cli", "distillplan", "DistillPlan.Tui", "DistillPlan.Reports", "Terminal.Gui", "ScottPlot", "System.CommandLine", "SkiaSharp"];
         Assert.Empty(references.Intersect(forbidden));
         // Only the runtime and the two domain libraries.

@@ -5,7 +5,7 @@ using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Core.Quantities;
 using DistillPlan.Core.Reports;
 
-namespace DistillPlan.Core.Tests.Checks;
+namespace DistillPlan.Core.Tests.Findings;
 
 /// <summary>Findings are data with wording for every case, and a check that cannot be evaluated says so.</summary>
 public class FindingTests

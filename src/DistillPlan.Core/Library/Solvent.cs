@@ -38,7 +38,7 @@ public sealed record Solvent
     public required string Name { get; init; }
     /// <summary>Other names people type (EtOAc, THF …).</summary>
     public IReadOnlyList<string> Aliases { get; init; } = [];
-    /// <summary>CAS registry number.</summary>
+    /// <summary>CAS registry number; empty for a user's compound that has none.</summary>
     public required string Cas { get; init; }
     /// <summary>Molecular formula, for display.</summary>
     public string? Formula { get; init; }

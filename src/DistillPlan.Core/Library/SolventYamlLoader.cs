@@ -124,8 +124,9 @@ public static class SolventYamlLoader
             return new FlammabilityRecord(v, searched, reason);
         }
 
-        string cas = e.Required("cas").String();
-        if (!CasNumber.IsValid(cas)) throw e.Required("cas").Error($"'{cas}' is not a valid CAS number (check digit)");
+        // A user's own compound may have no CAS number; when one is given it must be valid.
+        string cas = e.Optional("cas")?.String() ?? "";
+        if (cas.Length > 0 && !CasNumber.IsValid(cas)) throw e.Required("cas").Error($"'{cas}' is not a valid CAS number (check digit)");
 
         double molarMass = Sourced("molar_mass_g_per_mol", required: true)!.Value;
         double density = Sourced("liquid_density_kg_per_m3", false, "at_k") ?? double.NaN;

@@ -105,7 +105,7 @@ public sealed class VaporPressureModel
             }
 
         if (SegmentCurve(temperatureK) is { } curve)
-            return new PsatResult(Math.Exp(ExtendedLnP(curve, temperatureK)), temperatureK, curve, !curve.Covers(temperatureK));
+            return new PsatResult(Math.Exp(ExtendedLnP(curve, temperatureK)), temperatureK, curve, !Curves.Any(c => c.Covers(temperatureK)));
 
         // Outside every range: extend the nearest edge along ln P = a − b/T.
         var nearest = Curves.MinBy(c => DistanceOutside(c, temperatureK))!;

@@ -17,14 +17,6 @@ public class LatentHeatTests
     private const double R = 8.314462618;   // CODATA 2018
     private const int Samples = 60;
 
-    public static TheoryData<string, int> EveryCurve()
-    {
-        var data = new TheoryData<string, int>();
-        foreach (var s in ShippedLibrary.Instance.Solvents)
-            for (int i = 0; i < s.VaporPressure.Curves.Count; i++) data.Add(s.Name, i);
-        return data;
-    }
-
     private static double Implied(IVaporPressureCurve c, double t)
     {
         const double h = 0.01;
@@ -32,7 +24,7 @@ public class LatentHeatTests
     }
 
     [Theory]
-    [MemberData(nameof(EveryCurve))]
+    [MemberData(nameof(CurvePropertyTests.EveryCurve), MemberType = typeof(CurvePropertyTests))]
     public void The_latent_heat_a_curve_implies_is_positive_and_does_not_rise_with_temperature(string name, int index)
     {
         var s = ShippedLibrary.Instance.Find(name);

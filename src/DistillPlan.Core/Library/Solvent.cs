@@ -38,7 +38,7 @@ public sealed record Solvent
     public required string Name { get; init; }
     /// <summary>Other names people type (EtOAc, THF …).</summary>
     public IReadOnlyList<string> Aliases { get; init; } = [];
-    /// <summary>CAS registry number.</summary>
+    /// <summary>CAS registry number; empty for a user's compound that has none.</summary>
     public required string Cas { get; init; }
     /// <summary>Molecular formula, for display.</summary>
     public string? Formula { get; init; }
@@ -58,6 +58,19 @@ public sealed record Solvent
     public double? FlashPointK { get; init; }
     /// <summary>Autoignition temperature [K].</summary>
     public double? AutoignitionK { get; init; }
+    /// <summary>The flash-point record: value and/or the tables that do not publish one.</summary>
+    public FlammabilityRecord FlashPointRecord { get; init; } = FlammabilityRecord.NotRecorded;
+    /// <summary>The autoignition record: value and/or the tables that do not publish one.</summary>
+    public FlammabilityRecord AutoignitionRecord { get; init; } = FlammabilityRecord.NotRecorded;
+    /// <summary>Null when the flash point is known; otherwise why a check on it is not evaluated.</summary>
+    public string? FlashPointMissingReason => FlashPointK is null ? FlashPointRecord.MissingReason() : null;
+    /// <summary>Null when the autoignition temperature is known; otherwise why a check on it is not evaluated.</summary>
+    public string? AutoignitionMissingReason => AutoignitionK is null ? AutoignitionRecord.MissingReason() : null;
+    /// <summary>
+    /// Null when the vapour pressure rests on published curves; otherwise one line saying it is an
+    /// estimate and how large its error may be (the <c>estimated-curve</c> check quotes it).
+    /// </summary>
+    public string? EstimatedCurveNote => VaporPressure.EstimatedCurveNote;
     /// <summary>Peroxide-formation class.</summary>
     public PeroxideClass PeroxideClass { get; init; }
     /// <summary>Behaviour flags.</summary>

@@ -20,7 +20,7 @@ public sealed class SolventLibrary
         Files = files;
         _byKey = new Dictionary<string, Solvent>(StringComparer.Ordinal);
         foreach (var s in solvents)
-            foreach (string key in new[] { s.Name, s.Cas }.Concat(s.Aliases))
+            foreach (string key in new[] { s.Name, s.Cas }.Concat(s.Aliases).Where(k => k.Length > 0))
             {
                 string k = Normalise(key);
                 if (_byKey.TryGetValue(k, out var other) && !ReferenceEquals(other, s))
@@ -64,7 +64,7 @@ public sealed class SolventLibrary
         var merged = shipped.Solvents.ToList();
         foreach (var s in mine.Solvents)
         {
-            int i = merged.FindIndex(x => x.Cas == s.Cas || Normalise(x.Name) == Normalise(s.Name));
+            int i = merged.FindIndex(x => (s.Cas.Length > 0 && x.Cas == s.Cas) || Normalise(x.Name) == Normalise(s.Name));
             if (i >= 0) merged[i] = s; else merged.Add(s);
         }
         return new SolventLibrary(merged, mine.Sources, [shippedPath, user]);
@@ -134,7 +134,7 @@ public sealed class SolventLibrary
             .Take(count).Select(t => t.Name).ToList();
     }
 
-    private static IEnumerable<string> Keys(Solvent s) => new[] { s.Name, s.Cas }.Concat(s.Aliases).Select(Normalise);
+    private static IEnumerable<string> Keys(Solvent s) => new[] { s.Name, s.Cas }.Concat(s.Aliases).Where(k => k.Length > 0).Select(Normalise);
 
     /// <summary>Lower case, with spaces, hyphens and underscores made the same.</summary>
     public static string Normalise(string name) =>

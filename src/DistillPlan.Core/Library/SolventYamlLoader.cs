@@ -93,15 +93,47 @@ public static class SolventYamlLoader
             return v;
         }
 
-        string cas = e.Required("cas").String();
-        if (!CasNumber.IsValid(cas)) throw e.Required("cas").Error($"'{cas}' is not a valid CAS number (check digit)");
+        // {value: K, source: key} | {not_published: [table keys], reason: text} | both (a value from
+        // elsewhere, e.g. memory, for a compound the standards do not list).
+        FlammabilityRecord Flammability(string field)
+        {
+            var c = e.Optional(field);
+            if (c is null) return FlammabilityRecord.NotRecorded;
+            c.OnlyKeys("value", "source", "not_published", "reason");
+            double? v = null;
+            string? valueSource = null;
+            if (c.Optional("value") is { } val)
+            {
+                v = val.Positive();
+                valueSource = SourceOf(c, field);
+            }
+            else if (c.Has("source")) throw c.Required("source").Error("a source without a value; give 'value' or only 'not_published'");
+            var searched = new List<string>();
+            if (c.Optional("not_published") is { } np)
+                foreach (var item in np.Items())
+                {
+                    string key = item.String();
+                    if (!sources.ContainsKey(key)) throw item.Error($"source '{key}' is not defined in the file's 'sources' map");
+                    if (key == valueSource) throw item.Error($"'{key}' is named as the value's source and as not publishing it");
+                    searched.Add(key);
+                }
+            if (v is null && searched.Count == 0)
+                throw c.Error("give a value with its source, or list under 'not_published' the tables that do not list it");
+            string? reason = c.Optional("reason")?.String();
+            if (reason is not null && searched.Count == 0) throw c.Required("reason").Error("'reason' goes with 'not_published'");
+            return new FlammabilityRecord(v, searched, reason);
+        }
+
+        // A user's own compound may have no CAS number; when one is given it must be valid.
+        string cas = e.Optional("cas")?.String() ?? "";
+        if (cas.Length > 0 && !CasNumber.IsValid(cas)) throw e.Required("cas").Error($"'{cas}' is not a valid CAS number (check digit)");
 
         double molarMass = Sourced("molar_mass_g_per_mol", required: true)!.Value;
         double density = Sourced("liquid_density_kg_per_m3", false, "at_k") ?? double.NaN;
         double? tm = Sourced("melting_point_k");
         double tb = Sourced("normal_boiling_point_k", required: true)!.Value;
-        double? flash = Sourced("flash_point_k");
-        double? autoignition = Sourced("autoignition_k");
+        var flash = Flammability("flash_point_k");
+        var autoignition = Flammability("autoignition_k");
 
         double? tc = null, pc = null;
         if (e.Optional("critical") is { } crit)
@@ -186,8 +218,10 @@ public static class SolventYamlLoader
             NormalBoilingPointK = tb,
             CriticalTemperatureK = tc,
             CriticalPressurePa = pc,
-            FlashPointK = flash,
-            AutoignitionK = autoignition,
+            FlashPointK = flash.ValueK,
+            AutoignitionK = autoignition.ValueK,
+            FlashPointRecord = flash,
+            AutoignitionRecord = autoignition,
             PeroxideClass = peroxide,
             Flags = flags,
             UnifacGroups = groups,
@@ -201,11 +235,12 @@ public static class SolventYamlLoader
     private static IVaporPressureCurve ReadCurve(YamlCursor c, Func<YamlCursor, string, string> sourceOf)
     {
         string form = c.Required("form").String();
-        string[] common = ["form", "t_min_k", "t_max_k", "source"];
+        string[] common = ["form", "t_min_k", "t_max_k", "source", "estimate"];
         double tmin = c.Required("t_min_k").Positive(), tmax = c.Required("t_max_k").Positive();
         if (!(tmin < tmax)) throw c.Required("t_max_k").Error($"t_max_k {tmax} must be above t_min_k {tmin}");
         string source = sourceOf(c, "vapor_pressure");
         double N(string k) => c.Required(k).Number();
+        var estimate = c.Optional("estimate") is { } est ? ReadEstimate(est, sourceOf) : null;
 
         IVaporPressureCurve curve;
         switch (form)
@@ -225,12 +260,12 @@ public static class SolventYamlLoader
                 curve = new Antoine
                 {
                     Log10 = form == "antoine-log10", A = N("a"), B = N("b"), C = N("c"),
-                    PressureUnitPa = unitPa, CelsiusScale = tUnit == "C", Source = source, TMinK = tmin, TMaxK = tmax,
+                    PressureUnitPa = unitPa, CelsiusScale = tUnit == "C", Source = source, TMinK = tmin, TMaxK = tmax, Estimate = estimate,
                 };
                 break;
             case "dippr101":
                 c.OnlyKeys([.. common, "c1", "c2", "c3", "c4", "c5"]);
-                curve = new Dippr101 { C1 = N("c1"), C2 = N("c2"), C3 = N("c3"), C4 = N("c4"), C5 = N("c5"), Source = source, TMinK = tmin, TMaxK = tmax };
+                curve = new Dippr101 { C1 = N("c1"), C2 = N("c2"), C3 = N("c3"), C4 = N("c4"), C5 = N("c5"), Source = source, TMinK = tmin, TMaxK = tmax, Estimate = estimate };
                 break;
             case "wagner-3-6":
             case "wagner-2.5-5":
@@ -239,7 +274,7 @@ public static class SolventYamlLoader
                 {
                     FormName = form, TcK = c.Required("tc_k").Positive(), PcPa = c.Required("pc_pa").Positive(),
                     Terms = form == "wagner-3-6" ? Wagner.Form36(N("a"), N("b"), N("c"), N("d")) : Wagner.Form255(N("a"), N("b"), N("c"), N("d")),
-                    Source = source, TMinK = tmin, TMaxK = tmax,
+                    Source = source, TMinK = tmin, TMaxK = tmax, Estimate = estimate,
                 };
                 break;
             case "wagner-general":
@@ -250,14 +285,18 @@ public static class SolventYamlLoader
                     if (pair.Count != 2) throw t.Error("each term is [coefficient, exponent of tau]");
                     return (pair[0].Number(), pair[1].Number());
                 }).ToList();
-                curve = new Wagner { FormName = form, TcK = c.Required("tc_k").Positive(), PcPa = c.Required("pc_pa").Positive(), Terms = terms, Source = source, TMinK = tmin, TMaxK = tmax };
+                curve = new Wagner { FormName = form, TcK = c.Required("tc_k").Positive(), PcPa = c.Required("pc_pa").Positive(), Terms = terms, Source = source, TMinK = tmin, TMaxK = tmax, Estimate = estimate };
                 break;
             case "clausius-clapeyron":
-                c.OnlyKeys([.. common, "t1_k", "p1_pa", "dhvap_j_per_mol"]);
+                c.OnlyKeys([.. common, "t1_k", "p1_pa", "dhvap_j_per_mol", "watson_tc_k"]);
+                double t1 = c.Required("t1_k").Positive();
+                double? watsonTc = c.Optional("watson_tc_k")?.Positive();
+                if (watsonTc is double wtc && !(wtc > Math.Max(t1, tmax)))
+                    throw c.Required("watson_tc_k").Error($"watson_tc_k {wtc} K must lie above t1_k and t_max_k");
                 curve = new ClausiusClapeyron
                 {
-                    T1K = c.Required("t1_k").Positive(), P1Pa = c.Required("p1_pa").Positive(),
-                    EnthalpyJPerMol = c.Required("dhvap_j_per_mol").Positive(), Source = source, TMinK = tmin, TMaxK = tmax,
+                    T1K = t1, P1Pa = c.Required("p1_pa").Positive(), WatsonTcK = watsonTc,
+                    EnthalpyJPerMol = c.Required("dhvap_j_per_mol").Positive(), Source = source, TMinK = tmin, TMaxK = tmax, Estimate = estimate,
                 };
                 break;
             default:
@@ -269,6 +308,21 @@ public static class SolventYamlLoader
         if (!(double.IsFinite(p1) && double.IsFinite(p2) && p1 > 0 && p2 > p1))
             throw c.Required("form").Error($"the curve does not give a rising positive pressure over {tmin}–{tmax} K (check the coefficients)");
         return curve;
+    }
+
+    // estimate: {basis: trouton|hvap, expected_error_percent: 10, source: key}
+    private static CurveEstimate ReadEstimate(YamlCursor e, Func<YamlCursor, string, string> sourceOf)
+    {
+        e.OnlyKeys("basis", "expected_error_percent", "source");
+        string b = e.Required("basis").String();
+        var basis = b switch
+        {
+            "trouton" => EstimateBasis.Trouton,
+            "hvap" => EstimateBasis.EnthalpyOfVaporization,
+            _ => throw e.Required("basis").Error($"'{b}' is not an estimate basis; allowed: trouton, hvap"),
+        };
+        double error = e.Required("expected_error_percent").Positive();
+        return new CurveEstimate(basis, error, sourceOf(e, "vapor_pressure.estimate"));
     }
 
     private static IEnthalpyOfVaporization ReadEnthalpy(YamlCursor h, double? tc, Func<YamlCursor, string, string> sourceOf)

@@ -32,6 +32,8 @@ public sealed class Antoine : IVaporPressureCurve
     public required double TMinK { get; init; }
     /// <inheritdoc />
     public required double TMaxK { get; init; }
+    /// <inheritdoc />
+    public CurveEstimate? Estimate { get; init; }
 
     private double Base => Log10 ? 10.0 : Math.E;
     private double Offset => CelsiusScale ? PhysicalConstants.ZeroCelsiusK : 0.0;

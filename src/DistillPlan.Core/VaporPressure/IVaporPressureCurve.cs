@@ -19,6 +19,8 @@ public interface IVaporPressureCurve
     double PressurePa(double temperatureK);
     /// <summary>Saturation temperature [K] at pressure <paramref name="pressurePa"/> [Pa].</summary>
     double TemperatureK(double pressurePa);
+    /// <summary>Set when the curve is an estimate rather than a fit to measured pressures; null for published curves.</summary>
+    CurveEstimate? Estimate { get; }
     /// <summary>True when T lies inside the fitted range.</summary>
     bool Covers(double temperatureK) => temperatureK >= TMinK && temperatureK <= TMaxK;
 }
@@ -37,6 +39,8 @@ public abstract class NumericallyInvertedCurve : IVaporPressureCurve
     public required double TMinK { get; init; }
     /// <inheritdoc />
     public required double TMaxK { get; init; }
+    /// <inheritdoc />
+    public CurveEstimate? Estimate { get; init; }
     /// <inheritdoc />
     public abstract double PressurePa(double temperatureK);
 

@@ -2,7 +2,7 @@ using System.Text.Json;
 
 namespace DistillPlan.Cli.Tests;
 
-/// <summary>The mixture verbs of DESIGN §5 against published data.</summary>
+/// <summary>The mixture verbs (docs/interface.md) against published data.</summary>
 public class MixtureVerbTests
 {
     [Fact]

@@ -2,7 +2,7 @@ using System.Text.Json;
 
 namespace DistillPlan.Cli.Tests;
 
-/// <summary>The verbs of DESIGN §5, run as a script would, against outside values.</summary>
+/// <summary>The verbs (docs/interface.md), run as a script would, against outside values.</summary>
 public class VerbTests
 {
     private static string[] Codes(JsonElement plan) => plan.GetProperty("checks").EnumerateArray().Select(c => c.GetProperty("code").GetString()!).ToArray();

@@ -5,7 +5,7 @@ using DistillPlan.Core.Library;
 namespace DistillPlan.Core.Planning;
 
 /// <summary>
-/// Reads a charge as people write it (DESIGN §5): <c>NAME[=AMOUNT[UNIT]]</c> items joined by
+/// Reads a charge as people write it (docs/interface.md, Charges): <c>NAME[=AMOUNT[UNIT]]</c> items joined by
 /// commas, e.g. <c>ethyl-acetate</c>, <c>ethanol=30,water=70</c>, <c>thf=12L,toluene=3L</c>,
 /// <c>ethanol=90%,water=10%</c>. Bare numbers are parts on the chosen basis and are
 /// normalised; percentages must add to 100; absolute amounts (mL, L, g, kg, mol …) are

@@ -32,6 +32,8 @@ public sealed class PlanSetting
     public required string Caption { get; init; }
     /// <summary>Help text for <c>--help</c> and the text UI.</summary>
     public required string Help { get; init; }
+    /// <summary>A short hint for the text-UI field when the setting has no default value to show (at most 40 characters).</summary>
+    public string? Hint { get; init; }
     /// <summary>Where it belongs.</summary>
     public required SettingGroup Group { get; init; }
     /// <summary>The plan-file section it is written under (settings, charge, product, strip).</summary>

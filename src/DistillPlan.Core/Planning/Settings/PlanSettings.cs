@@ -19,26 +19,26 @@ public static class PlanSettings
     [
         new()
         {
-            Key = "basis", Label = "charge basis", Caption = "Basis:", Group = SettingGroup.Charge, FileSection = "charge",
+            Key = "basis", Hint = "volume (default), mass, mole", Label = "charge basis", Caption = "Basis:", Group = SettingGroup.Charge, FileSection = "charge",
             Help = "What bare numbers in a charge mean: volume (default), mass or mole.",
             Apply = (b, v) => b.Basis = ParseBasis(v, "--basis"),
         },
         new()
         {
-            Key = "model", Label = "activity model", Caption = "Model:", Group = SettingGroup.Charge, FileSection = "charge",
+            Key = "model", Hint = "dortmund (default), unifac, ideal", Label = "activity model", Caption = "Model:", Group = SettingGroup.Charge, FileSection = "charge",
             Help = "Activity model for mixtures: dortmund (modified UNIFAC, the default where it covers every pair), unifac (original UNIFAC) or ideal.",
             Apply = (b, v) => b.Model = ParseModel(v, "--model"),
         },
         new()
         {
-            Key = "product-mass", Label = "product mass", Caption = "Product mass:", Group = SettingGroup.Charge,
+            Key = "product-mass", Hint = "optional, non-volatile; g, mg, kg", Label = "product mass", Caption = "Product mass:", Group = SettingGroup.Charge,
             FileSection = "product", FileKeyOverride = "mass",
             Help = "Non-volatile product dissolved in the charge: its mass (20g, 1.5kg; bare number: g).",
             Apply = (b, v) => b.ProductMassG = ReadMassG(v, "--product-mass"),
         },
         new()
         {
-            Key = "product-molar-mass", Label = "product molar mass", Caption = " molar mass:", Group = SettingGroup.Charge,
+            Key = "product-molar-mass", Hint = "g/mol, with the product mass", Label = "product molar mass", Caption = " molar mass:", Group = SettingGroup.Charge,
             FileSection = "product", FileKeyOverride = "molar-mass",
             Help = "Molar mass of the product in g/mol (with --product-mass).",
             Apply = (b, v) => b.ProductMolarMassGPerMol = ReadPositive(v.Replace("g/mol", "").Trim(), "--product-molar-mass", "a molar mass in g/mol above zero, e.g. 320", 1e6),
@@ -64,7 +64,7 @@ public static class PlanSettings
         },
         new()
         {
-            Key = "altitude", Label = "altitude", Caption = " or altitude:", Group = SettingGroup.Equipment,
+            Key = "altitude", Hint = "metres; instead of atmospheric", Label = "altitude", Caption = " or altitude:", Group = SettingGroup.Equipment,
             Help = "Altitude in metres, for the ICAO standard atmosphere (instead of --atmospheric).",
             Apply = (b, v) =>
             {
@@ -178,20 +178,20 @@ public static class PlanSettings
         },
         new()
         {
-            Key = "product-max", Label = "product maximum temperature", Caption = " max temp:", Group = SettingGroup.Rules,
+            Key = "product-max", Hint = "none unless given; 60, 333K", Label = "product maximum temperature", Caption = " max temp:", Group = SettingGroup.Rules,
             Help = "Highest temperature the product may see; the bath stays at or below it.",
             Apply = (b, v) => b.Rules = b.Rules with { ProductMax = ReadTemperature(v, "--product-max", -80, 400) },
             Value = b => b.Rules.ProductMax is Temperature t ? Quantity.Of(t) : null,
         },
         new()
         {
-            Key = "pressure", Label = "strip pressure", Caption = "Hold pressure:", Group = SettingGroup.Strip, FileSection = "strip",
+            Key = "pressure", Hint = "strip: hold it (default: hold vapour T)", Label = "strip pressure", Caption = "Hold pressure:", Group = SettingGroup.Strip, FileSection = "strip",
             Help = "Strip: hold this pressure and let the boiling temperature rise (default: hold the plan's vapour temperature and let the pressure fall).",
             Apply = (b, v) => b.StripPressure = PressureUnits.Parse(v, "--pressure", b.Equipment.Atmosphere),
         },
         new()
         {
-            Key = "end", Label = "strip end", Caption = "Strip end:", Group = SettingGroup.Strip, FileSection = "strip",
+            Key = "end", Hint = "left=10%, residual=thf:0.01, pump, dry", Label = "strip end", Caption = "Strip end:", Group = SettingGroup.Strip, FileSection = "strip",
             Help = "Strip: where to stop: " + StripEnd.Allowed + ". Default: what the pump can hold, or 5 % left.",
             Apply = (b, v) => b.StripEnd = StripEnd.Parse(v),
         },
@@ -244,7 +244,7 @@ public static class PlanSettings
             else s.ApplyDefault(b);
         }
         setting.ApplyDefault(b);
-        return setting.Value(b) is Quantity q ? $"default {format.Format(q)}" : setting.Help.Split(';', '(')[0].TrimEnd('.', ' ');
+        return setting.Value(b) is Quantity q ? $"default {format.Format(q)}" : setting.Hint ?? "";
     }
 
     internal static Basis ParseBasis(string text, string field) => text.Trim().ToLowerInvariant() switch

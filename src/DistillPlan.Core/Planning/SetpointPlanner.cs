@@ -104,7 +104,13 @@ public static class SetpointPlanner
         if (mixture is null || atmospheric) return plan;
 
         // A mixture's pressure ramp at the plan's vapour temperature, with the strip's own ends.
-        var ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: 0.1);
+        // The setpoints stand without it; a failure is said, not dropped.
+        StripPlan ramp;
+        try { ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: 0.1); }
+        catch (DistillPlanException e)
+        {
+            return plan with { Notes = [.. notes, Make("strip-not-computed", Severity.Caution, "", [], W("reason", e.Message))] };
+        }
         if (ramp.Steps.Count > 1)
         {
             var end = ramp.Steps[^1];

@@ -39,8 +39,8 @@ public sealed record Finding
     /// <summary>The severity as the lower-case word used in output.</summary>
     public string SeverityWord => Severity.ToString().ToLowerInvariant();
 
-    /// <summary>Same code, variant and subject: what a strip step compares with the plan to show only what changed.</summary>
-    public string Identity => Code + "/" + Variant + "/" + (Values.TryGetValue("solvent", out var s) ? s.Text : "");
+    /// <summary>Same code, variant and subjects (every named value: solvents, pairs): what a strip step compares with the plan to show only what changed.</summary>
+    public string Identity => Code + "/" + Variant + "/" + string.Join("/", Values.Values.Where(v => v.Kind == QuantityKind.Text).Select(v => v.Text));
 
     /// <summary>The message in a display format (the one wording catalogue).</summary>
     public string Message(DisplayFormat format) => Wording.Message(this, format);

@@ -49,6 +49,7 @@ public static class StripPlanner
         {
             Basis = volumes ? StripBasis.Volume : StripBasis.Moles,
             ReportEveryEvaporatedFraction = reportEvery,
+            RelativeTolerance = 1e-6,
             MinimumResidueFraction = peroxide.Count > 0 ? PeroxideMinimumResidue : null,
         };
         options = request.End.Kind switch
@@ -120,7 +121,8 @@ public static class StripPlanner
         var overall = steps.Count == 0 ? plan.Checks
             : fixedT ? plan.Checks
             : Check(plan, steps[0], withAzeotropes: true);
-        var seen = overall.ToDictionary(f => f.Identity, f => f.Severity);
+        var seen = new Dictionary<string, Severity>();
+        foreach (var f in overall) seen[f.Identity] = seen.TryGetValue(f.Identity, out var was) && was > f.Severity ? was : f.Severity;
         for (int k = 0; k < steps.Count; k++)
         {
             var found = Check(plan, steps[k], withAzeotropes: false).ToList();

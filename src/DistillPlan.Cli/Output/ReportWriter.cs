@@ -34,7 +34,18 @@ internal static class ReportWriter
         if (r.GetValue(common.Output) is string path)
             Save(path, "--output", force, temp => File.WriteAllText(temp, text, new UTF8Encoding(false)));
         else r.InvocationConfiguration.Output.Write(text);
-        if (plot is not null) Save(plot, "--plot", force, temp => PlotFile.Save(report.Plots, display, temp, plotKind));
+        if (plot is not null) Save(plot, "--plot", force, temp => SavePlot(report, display, temp, plotKind, plot));
+    }
+
+    // The native binary cannot embed SkiaSharp's drawing library (README, "Install"): say so in
+    // one line instead of an internal error when it was not copied beside the program.
+    private static void SavePlot(Report report, DisplayFormat display, string temp, string kind, string plot)
+    {
+        try { PlotFile.Save(report.Plots, display, temp, kind); }
+        catch (Exception e) when (e is DllNotFoundException || e.InnerException is DllNotFoundException)
+        {
+            throw new InputException("--plot", plot, "", "--plot: drawing a plot file needs libSkiaSharp.so in the folder of distillplan, and it is not there (README, Install)");
+        }
     }
 
     private static void Save(string path, string option, bool force, Action<string> write)

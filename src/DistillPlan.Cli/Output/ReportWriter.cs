@@ -42,10 +42,18 @@ internal static class ReportWriter
     private static void SavePlot(Report report, DisplayFormat display, string temp, string kind, string plot)
     {
         try { PlotFile.Save(report.Plots, display, temp, kind); }
-        catch (Exception e) when (e is DllNotFoundException || e.InnerException is DllNotFoundException)
+        catch (Exception e) when (MissingNativeLibrary(e))
         {
             throw new InputException("--plot", plot, "", "--plot: drawing a plot file needs libSkiaSharp.so in the folder of distillplan, and it is not there (README, Install)");
         }
+    }
+
+    // SkiaSharp's loader failure arrives wrapped in one or more type-initializer exceptions.
+    private static bool MissingNativeLibrary(Exception? e)
+    {
+        for (; e is not null; e = e.InnerException)
+            if (e is DllNotFoundException) return true;
+        return false;
     }
 
     private static void Save(string path, string option, bool force, Action<string> write)

@@ -120,7 +120,7 @@ public static class JsonReport
                 else o[Key(c.JsonKey, c.Kind)] = Value(row.Cells[i]);
             }
             o["checks"] = Findings(row.Findings);
-            rows.Add(o);
+            rows.Add((JsonNode)o); // the JsonNode overload: Add<T> is the reflection path (trim warning IL2026)
         }
         return rows;
     }

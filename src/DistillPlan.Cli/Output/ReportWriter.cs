@@ -34,7 +34,26 @@ internal static class ReportWriter
         if (r.GetValue(common.Output) is string path)
             Save(path, "--output", force, temp => File.WriteAllText(temp, text, new UTF8Encoding(false)));
         else r.InvocationConfiguration.Output.Write(text);
-        if (plot is not null) Save(plot, "--plot", force, temp => PlotFile.Save(report.Plots, display, temp, plotKind));
+        if (plot is not null) Save(plot, "--plot", force, temp => SavePlot(report, display, temp, plotKind, plot));
+    }
+
+    // The native binary cannot embed SkiaSharp's drawing library (README, "Install"): say so in
+    // one line instead of an internal error when it was not copied beside the program.
+    private static void SavePlot(Report report, DisplayFormat display, string temp, string kind, string plot)
+    {
+        try { PlotFile.Save(report.Plots, display, temp, kind); }
+        catch (Exception e) when (MissingNativeLibrary(e))
+        {
+            throw new InputException("--plot", plot, "", "--plot: drawing a plot file needs libSkiaSharp.so in the folder of distillplan, and it is not there (README, Install)");
+        }
+    }
+
+    // SkiaSharp's loader failure arrives wrapped in one or more type-initializer exceptions.
+    private static bool MissingNativeLibrary(Exception? e)
+    {
+        for (; e is not null; e = e.InnerException)
+            if (e is DllNotFoundException) return true;
+        return false;
     }
 
     private static void Save(string path, string option, bool force, Action<string> write)

@@ -53,8 +53,7 @@ public sealed class SolventLibrary
     /// </summary>
     public static SolventLibrary LoadWithUser(string? userPath)
     {
-        string shippedPath = FindShipped();
-        var shipped = SolventYamlLoader.Load(shippedPath);
+        var (shipped, shippedPath) = ReadShipped();
         string? user = userPath ?? (File.Exists(DefaultUserPath) ? DefaultUserPath : null);
         if (user is null) return new SolventLibrary(shipped.Solvents, shipped.Sources, [shippedPath]);
         if (!File.Exists(user))
@@ -71,7 +70,27 @@ public sealed class SolventLibrary
     }
 
     /// <summary>The shipped library alone.</summary>
-    public static SolventLibrary LoadShipped() => Load(FindShipped());
+    public static SolventLibrary LoadShipped()
+    {
+        var (file, name) = ReadShipped();
+        return new SolventLibrary(file.Solvents, file.Sources, [name]);
+    }
+
+    /// <summary>What <see cref="Files"/> names when the library built into the program answered.</summary>
+    public const string BuiltInName = "solvents.yaml (built in)";
+
+    // The build embeds the repository's solvents.yaml (DistillPlan.Core.csproj), so a single
+    // native binary needs no file beside it; a file found by FindShipped still wins.
+    private const string BuiltInResource = "DistillPlan.Core.Library.solvents.yaml";
+
+    private static (LibraryFile File, string Name) ReadShipped()
+    {
+        if (FindShipped() is string path) return (SolventYamlLoader.Load(path), path);
+        using var stream = typeof(SolventLibrary).Assembly.GetManifestResourceStream(BuiltInResource)
+            ?? throw new LibraryFormatException(FileName, 0, "file", "the shipped solvent library is not built into this program and was not found next to it or above it");
+        using var reader = new StreamReader(stream);
+        return (SolventYamlLoader.Parse(reader.ReadToEnd(), BuiltInName), BuiltInName);
+    }
 
     /// <summary>The per-user library file: $XDG_CONFIG_HOME/distillplan/solvents.yaml, else ~/.config/distillplan/solvents.yaml.</summary>
     public static string DefaultUserPath
@@ -87,10 +106,11 @@ public sealed class SolventLibrary
     }
 
     /// <summary>
-    /// Where the shipped library is: $DISTILLPLAN_SHIPPED_LIBRARY, next to the executable (the
-    /// build copies it there), or in a parent folder (running from a source checkout).
+    /// The shipped library file on disk, if any: $DISTILLPLAN_SHIPPED_LIBRARY, next to the
+    /// executable (the build copies it there), or in a parent folder (running from a source
+    /// checkout). Null means the copy built into the program is used.
     /// </summary>
-    public static string FindShipped()
+    public static string? FindShipped()
     {
         string? env = Environment.GetEnvironmentVariable("DISTILLPLAN_SHIPPED_LIBRARY");
         if (!string.IsNullOrEmpty(env)) return env;
@@ -99,7 +119,7 @@ public sealed class SolventLibrary
             string candidate = Path.Combine(dir.FullName, FileName);
             if (File.Exists(candidate)) return candidate;
         }
-        throw new LibraryFormatException(FileName, 0, "file", "the shipped solvent library was not found next to the program or above it");
+        return null;
     }
 
     /// <summary>The solvent for a name, alias or CAS number; throws with suggestions when unknown.</summary>

@@ -63,7 +63,10 @@ public static class StripPlanner
         var hold = SetpointPlanner.PumpHold(equipment, plan.Rules);
         var hottestBath = plan.ProductMax is Temperature pm ? Temperature.Min(equipment.HeatingMax, pm) : equipment.HeatingMax;
         StripResult result;
-        if (request.FixedPressure is Pressure p)
+        // A plan whose setpoint the condensate decided holds that pressure: at its vapour
+        // temperature the pressure would fall below what the condenser can capture.
+        var fixedPressure = request.FixedPressure ?? (plan.LimitingConstraint == "condensate-capture" ? plan.VacuumSetpoint : null);
+        if (fixedPressure is Pressure p)
         {
             if (p < hold)
                 throw new InputException("--pressure", PressureUnits.Format(p, PressureUnits.Millibar),
@@ -112,7 +115,7 @@ public static class StripPlanner
             var bath = fixedT ? plan.Bath : vapor + plan.Rules.BathToVapor;
             return new StripStepPlan(evaporated, Pressure.FromPascal(s.PressurePa), vapor, bath,
                 Renormalised(s.Liquid, names), Renormalised(s.Vapor, names),
-                s.DistillateMol, s.ResidueMol, []);
+                s.DistillateMol, s.ResidueMol, []) { LiquidPhases = s.LiquidPhases };
         }
         var steps = result.Steps.Select(ToStep).ToList();
 
@@ -150,9 +153,10 @@ public static class StripPlanner
         var components = plan.System.Components;
         double[] x = components.Select(s => step.Liquid.GetValueOrDefault(s.Name)).ToArray();
         double[] y = components.Select(s => step.VaporComposition.GetValueOrDefault(s.Name)).ToArray();
-        var (azeotropes, problem) = withAzeotropes && plan.System is MixtureBoilingSystem m ? m.Azeotropes(step.Pressure.Pascal) : ([], null);
+        var survey = withAzeotropes && plan.System is MixtureBoilingSystem m ? m.Azeotropes(step.Pressure.Pascal) : AzeotropeSurvey.None;
         var context = new CheckContext(plan.System, x, plan.Equipment, plan.Rules, step.Vapor, step.Bath, step.Pressure,
-            step.Vapor - plan.Rules.VaporToCondenser, y, false, plan.ProductMax, [], azeotropes, problem);
+            step.Vapor - plan.Rules.VaporToCondenser, y, false, plan.ProductMax, [], survey.Found, survey.Problem,
+            step.LiquidPhases.Count > 0 ? step.LiquidPhases : null);
         return PlanChecks.Evaluate(context);
     }
 

@@ -116,7 +116,7 @@ internal static class MixtureCommand
     }
 }
 
-/// <summary><c>distillplan azeotrope A B [--at P]</c>: minimum- and maximum-boiling azeotropes of a pair.</summary>
+/// <summary><c>distillplan azeotrope A B [--at P]</c>: minimum-boiling, maximum-boiling and heterogeneous azeotropes of a pair.</summary>
 internal static class AzeotropeCommand
 {
     public static Command Build()
@@ -126,7 +126,7 @@ internal static class AzeotropeCommand
         var second = new Argument<string>("second") { Description = "Second solvent of the pair." };
         var at = new Option<string?>("--at") { Description = "Pressure to search at (default 1013.25 mbar)." };
         var model = SettingOptions.Of("model");
-        var cmd = new Command("azeotrope", "Search a pair for minimum- and maximum-boiling azeotropes at a pressure.");
+        var cmd = new Command("azeotrope", "Search a pair for minimum-boiling, maximum-boiling and heterogeneous (two-liquid) azeotropes at a pressure.");
         cmd.Arguments.Add(first);
         cmd.Arguments.Add(second);
         cmd.Options.Add(at);

@@ -40,7 +40,8 @@ public sealed record Finding
     public string SeverityWord => Severity.ToString().ToLowerInvariant();
 
     /// <summary>Same code, variant and subject: what a strip step compares with the plan to show only what changed.</summary>
-    public string Identity => Code + "/" + Variant + "/" + (Values.TryGetValue("solvent", out var s) ? s.Text : "");
+    public string Identity => Code + "/" + Variant + "/" + (Values.TryGetValue("solvent", out var s) ? s.Text
+        : Values.TryGetValue("first", out var a) && Values.TryGetValue("second", out var b) ? a.Text + "+" + b.Text : "");
 
     /// <summary>The message in a display format (the one wording catalogue).</summary>
     public string Message(DisplayFormat format) => Wording.Message(this, format);

@@ -123,7 +123,7 @@ public static class StripPlanner
         var overall = steps.Count == 0 ? plan.Checks
             : fixedT ? plan.Checks
             : Check(plan, steps[0], withAzeotropes: true);
-        var seen = overall.ToDictionary(f => f.Identity, f => f.Severity);
+        var seen = overall.GroupBy(f => f.Identity).ToDictionary(g => g.Key, g => g.Max(f => f.Severity));
         for (int k = 0; k < steps.Count; k++)
         {
             var found = Check(plan, steps[k], withAzeotropes: false).ToList();

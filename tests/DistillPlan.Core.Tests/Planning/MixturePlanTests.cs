@@ -78,6 +78,17 @@ public class MixturePlanTests
     }
 
     [Fact]
+    public void A_wet_column_fraction_with_two_heteroazeotropes_is_planned_with_its_ramp()
+    {
+        // Ethyl acetate and heptane both form heteroazeotropes with water (CRC azeotrope table, after Horsley; from memory):
+        // two azeotrope findings of the same kind must both be kept, and the ramp must still be computed.
+        var p = PlanFor("ethyl-acetate=45,heptane=45,water=10");
+        Assert.Contains(p.Checks, c => c.Code == "two-liquids");
+        Assert.NotNull(p.Ramp);
+        Assert.True(p.Ramp!.Steps.Count > 1);
+    }
+
+    [Fact]
     public void A_pure_solvent_plan_gains_no_new_findings()
     {
         var p = PlanFor("ethanol");

@@ -63,7 +63,11 @@ internal static class MixtureCommand
                     ("dew_liquid", F(dew.Liquid)),
                     ("activity_coefficients", F(bubble.ActivityCoefficients)),
                     ("relative_volatility", J.Arr(bubble.RelativeVolatilities.Select(a => (JsonNode)J.Obj(("first", a.First), ("second", a.Second), ("alpha", J.N(a.Alpha, 4)))))),
-                    ("extrapolated", J.Strings(bubble.ExtrapolatedComponents))));
+                    ("extrapolated", J.Strings(bubble.ExtrapolatedComponents)),
+                    ("liquid_phases", Math.Max(1, bubble.LiquidPhaseCount)),
+                    ("phases", bubble.LiquidPhaseCount > 1 ? Phases(bubble.LiquidPhases) : null),
+                    ("liquid_phase_basis", bubble.LiquidPhaseBasis),
+                    ("approximate", bubble.ApproximationNote)));
                 return CliApp.Ok;
             }
             o.WriteLine($"{c.Describe()}  [model: {bubble.Model}]");
@@ -74,6 +78,13 @@ internal static class MixtureCommand
             foreach (var s in system.Components)
                 o.WriteLine($"  {s.Name,-24} {bubble.Liquid[s.Name],9:0.0000} {bubble.Vapor[s.Name],9:0.0000} {bubble.ActivityCoefficients[s.Name],7:0.000}");
             foreach (var a in bubble.RelativeVolatilities) o.WriteLine($"  α({a.First}/{a.Second}) = {a.Alpha:0.###}");
+            if (bubble.LiquidPhaseCount > 1)
+            {
+                o.WriteLine("  Two liquid phases at the bubble point (the pot boils at the three-phase point):");
+                WritePhases(o, bubble.LiquidPhases);
+            }
+            if (bubble.LiquidPhaseBasis is string basis) o.WriteLine($"  Liquid phases: {basis}");
+            if (bubble.ApproximationNote is string approx) o.WriteLine($"  Note: {approx}");
             return CliApp.Ok;
         });
         return cmd;
@@ -86,6 +97,18 @@ internal static class MixtureCommand
         return text is null ? standard : PressureUnits.Parse(text, "--at", standard);
     }
 
+    /// <summary>JSON <c>phases</c>: each liquid layer's share and mole fractions.</summary>
+    internal static JsonArray Phases(IReadOnlyList<LiquidPhase> phases) =>
+        J.Arr(phases.Select(ph => (JsonNode)J.Obj(("share", J.N(ph.Share, 5)), ("mole_fractions", J.Map(ph.MoleFractions, 5)))));
+
+    /// <summary>One text line per liquid layer.</summary>
+    internal static void WritePhases(TextWriter o, IReadOnlyList<LiquidPhase> phases)
+    {
+        for (int i = 0; i < phases.Count; i++)
+            o.WriteLine($"    layer {i + 1} ({phases[i].Share * 100:0.#} % of the liquid): " +
+                        string.Join(", ", phases[i].MoleFractions.Select(kv => $"{kv.Key} {kv.Value:0.000}")) + " (mole fraction)");
+    }
+
     internal static MixtureBoilingSystem Mixture(Charge c, string? model)
     {
         if (c.IsPure) throw new InputException("charge", c.Describe(), "two or more components, e.g. benzene=50,toluene=50");
@@ -93,7 +116,7 @@ internal static class MixtureCommand
     }
 }
 
-/// <summary><c>distillplan azeotrope A B [--at P]</c>: minimum- and maximum-boiling azeotropes of a pair.</summary>
+/// <summary><c>distillplan azeotrope A B [--at P]</c>: minimum-boiling, maximum-boiling and heterogeneous azeotropes of a pair.</summary>
 internal static class AzeotropeCommand
 {
     public static Command Build()
@@ -103,7 +126,7 @@ internal static class AzeotropeCommand
         var second = new Argument<string>("second") { Description = "Second solvent of the pair." };
         var at = new Option<string?>("--at") { Description = "Pressure to search at (default 1013.25 mbar)." };
         var model = SettingOptions.Of("model");
-        var cmd = new Command("azeotrope", "Search a pair for minimum- and maximum-boiling azeotropes at a pressure.");
+        var cmd = new Command("azeotrope", "Search a pair for minimum-boiling, maximum-boiling and heterogeneous (two-liquid) azeotropes at a pressure.");
         cmd.Arguments.Add(first);
         cmd.Arguments.Add(second);
         cmd.Options.Add(at);
@@ -137,16 +160,35 @@ internal static class AzeotropeCommand
                     ("fallback_reason", result.FallbackReason),
                     ("pressure_mbar", J.N(p.Millibar)),
                     ("pure_boiling_points_c", J.Map(result.PureBoilingPointsK.Select(kv => new KeyValuePair<string, double>(kv.Key, kv.Value - PhysicalConstants.ZeroCelsiusK)), 3)),
+                    ("liquid_phases", az is null ? null : Math.Max(1, az.LiquidPhases.Count)),
+                    ("phases", az is { LiquidPhases.Count: > 1 } ? MixtureCommand.Phases(az.LiquidPhases) : null),
+                    ("source", az?.Source),
+                    ("published_note", result.Note),
+                    ("uses_published_value", result.UsesPublishedValue),
+                    ("approximate", result.ApproximationNote),
                     ("all", J.Arr(result.Azeotropes.Select(x => (JsonNode)J.Obj(("temperature_c", J.N(x.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
-                        ("mole_fraction", J.Map(x.MoleFractions, 5)), ("kind", KindWord(x.Kind))))))));
+                        ("mole_fraction", J.Map(x.MoleFractions, 5)), ("kind", KindWord(x.Kind)),
+                        ("liquid_phases", Math.Max(1, x.LiquidPhases.Count)),
+                        ("phases", x.LiquidPhases.Count > 1 ? MixtureCommand.Phases(x.LiquidPhases) : null),
+                        ("source", x.Source)))))));
                 return CliApp.Ok;
             }
             o.WriteLine($"{a.Name} + {b.Name} at {PressureUnits.Format(p, unit)}  [model: {result.Model}]");
             if (result.FallbackReason is string f) o.WriteLine($"  Note: {f} (an ideal solution has no azeotrope)");
             if (!result.Found) o.WriteLine("  No azeotrope found: the pair is zeotropic at this pressure.");
             foreach (var x in result.Azeotropes)
+            {
                 o.WriteLine($"  {KindWord(x.Kind)} azeotrope at {Temperature.FromKelvin(x.TemperatureK)}: " +
-                            string.Join(", ", x.MoleFractions.Select(kv => $"{kv.Key} {kv.Value:0.###}")) + " (mole fraction)");
+                            string.Join(", ", x.MoleFractions.Select(kv => $"{kv.Key} {kv.Value:0.###}")) + " (mole fraction)" +
+                            (x.Source is string src ? $"; published: {src}" : ""));
+                if (x.LiquidPhases.Count > 1)
+                {
+                    o.WriteLine("  two liquid phases: the vapour lies between the layers");
+                    MixtureCommand.WritePhases(o, x.LiquidPhases);
+                }
+            }
+            if (result.Note is string pub) o.WriteLine($"  Note: {pub}");
+            if (result.ApproximationNote is string approx) o.WriteLine($"  Note: {approx}");
             return CliApp.Ok;
         });
         return cmd;

@@ -40,6 +40,8 @@ public static class PlanChecks
             Add(found, ToxicVapor(s));
         }
         Add(found, BumpingRisk(present, c));
+        Add(found, TwoLiquids(c));
+        Add(found, PotFreezing(present, c));
         Add(found, Breakthrough(c));
         Add(found, PumpLimit(c));
         foreach (var conflict in c.Conflicts) found.Add(ConflictFinding(conflict));
@@ -189,18 +191,86 @@ public static class PlanChecks
         double xAz = a.MoleFractions[first];
         var fractions = c.Components.Select((s, i) => (s.Name, c.Liquid[i])).ToDictionary(t => t.Name, t => t.Item2);
         double xFirst = fractions[first] / Math.Max(fractions[first] + fractions[second], 1e-300);
-        bool minimum = a.Kind == Mixtures.AzeotropeKind.MinimumBoiling;
+        string variant = a.Kind switch
+        {
+            Mixtures.AzeotropeKind.MinimumBoiling => "minimum",
+            Mixtures.AzeotropeKind.Heterogeneous => "heterogeneous",
+            _ => "maximum",
+        };
         // Gibbs–Konovalov: at a minimum-boiling azeotrope the residue moves away from it, at a maximum towards it.
         string side = xFirst > xAz ? first : second, other = side == first ? second : first;
-        string basis = c.System.Model switch
+        string basis = a.Source is string source ? $", published: {source}" : c.System.Model switch
         {
             "dortmund" => ", as predicted by modified UNIFAC (Dortmund)",
             "unifac" => ", as predicted by UNIFAC",
             _ => "",
         };
-        return Make("azeotrope", Severity.Warning, minimum ? "minimum" : "maximum", ["model"],
+        // A heteroazeotrope is a working route (azeotropic drying), not a dead end: said, not warned.
+        var severity = a.Kind == Mixtures.AzeotropeKind.Heterogeneous ? Severity.Caution : Severity.Warning;
+        return Make("azeotrope", severity, variant, ["model"],
             W("first", first), W("second", second), X("azeotrope_mole_fraction", xAz), X("charge_mole_fraction", xFirst),
             TK("temperature", a.TemperatureK), PPa("pressure", a.PressurePa), W("basis", basis), W("side", side), W("other", other));
+    }
+
+    /// <summary>
+    /// two-liquids: the pot holds two liquid layers at this state (docs/methods.md, Mixtures, two
+    /// liquid phases). While both are there the pot boils at the three-phase point: the vapour has
+    /// one fixed composition (the heteroazeotrope's for a pair), the pressure at a held vapour
+    /// temperature does not fall, and the layers bump. A caution, not a warning: the plan works and
+    /// azeotropic drying is common practice; the bumping itself is the bumping-risk check's.
+    /// </summary>
+    public static Finding? TwoLiquids(CheckContext c)
+    {
+        if (c.LiquidPhases is not { Count: > 1 } phases) return null;
+        var names = c.Components.Select(s => s.Name).ToList();
+        (string Main, double X, double Share) Layer(Mixtures.LiquidPhase p)
+        {
+            var main = p.MoleFractions.MaxBy(kv => kv.Value);
+            return (main.Key, main.Value, p.Share);
+        }
+        var (a, b) = (Layer(phases[0]), Layer(phases[1]));
+        // The organic layer first, so "water comes off with toluene" reads the usual way round.
+        if (a.Main == "water") (a, b) = (b, a);
+        int ia = names.IndexOf(a.Main), ib = names.IndexOf(b.Main);
+        bool water = b.Main == "water" && a.Main != "water";
+        return Make("two-liquids", Severity.Caution, water ? "water" : "", ["model"],
+            T("vapor", c.Vapor), P("pressure", c.Pressure),
+            W("layer_a", a.Main), X("layer_a_fraction", a.X), (("layer_a_share"), Reports.Quantity.Percent(a.Share)),
+            W("layer_b", b.Main), X("layer_b_fraction", b.X), (("layer_b_share"), Reports.Quantity.Percent(b.Share)),
+            X("vapor_a", ia >= 0 ? c.VaporComposition[ia] : 0), X("vapor_b", ib >= 0 ? c.VaporComposition[ib] : 0),
+            W("basis", c.LiquidPhaseBasis is string why ? " (" + why + ")" : ""));
+    }
+
+    /// <summary>
+    /// pot-freezing: the pot would sit at or near its freezing limit (a pure solvent's CRC melting
+    /// point; a mixture's dominant component's, see <see cref="Planning.PotFreezing"/>). A frozen pot
+    /// stops evaporating and can crack the flask. Where no limit can be given but a component present
+    /// melts above the pot's temperature, the check says it was not evaluated.
+    /// </summary>
+    public static Finding? PotFreezing(IReadOnlyList<Solvent> present, CheckContext c)
+    {
+        var limit = Planning.PotFreezing.Limit(c.Components, c.Liquid);
+        if (limit is null)
+        {
+            var above = present.Where(s => s.MeltingPointK is double tm && tm >= c.Vapor.Kelvin).MaxBy(s => s.MeltingPointK);
+            return above is null ? null
+                : NotEvaluated("pot-freezing", $"no component is over half of the pot and the library has no enthalpy of fusion to estimate its solid–liquid limit, while {above.Name} melts at {above.MeltingPointK - PhysicalConstants.ZeroCelsiusK:0.0} °C, above the pot at {c.Vapor.Celsius:0.0} °C",
+                    ["vapor-temp"], W("solvent", above.Name));
+        }
+        double margin = c.Vapor.Kelvin - limit.LimitK;
+        if (margin >= Planning.PotFreezing.MarginK - 1e-6) return null;
+        double safeK = limit.LimitK + Planning.PotFreezing.MarginK;
+        double? safeP = null;
+        try { safeP = c.System.BubblePressure(safeK, c.Liquid).PressurePa; } catch (DistillPlanException) { /* the action then names the temperature only */ }
+        var values = new List<(string, Reports.Quantity)>
+        {
+            W("solvent", limit.Solvent.Name), TK("melting_point", limit.LimitK), T("vapor", c.Vapor), P("pressure", c.Pressure),
+            TK("safe_vapor", safeK), safeP is double sp ? PPa("safe_pressure", sp) : W("safe_pressure", "the pressure where it boils there"),
+            W("estimate", limit.Basis == "dominant" ? $" (the pure melting point of {limit.Solvent.Name}, over half of the pot; an estimate: the other components lower it)" : ""),
+        };
+        return margin <= 0
+            ? Make("pot-freezing", Severity.Warning, "freezes", ["vapor-temp", "pressure"], [.. values])
+            : Make("pot-freezing", Severity.Caution, "near", ["vapor-temp", "pressure"], [.. values]);
     }
 
     /// <summary>extrapolated-curve: a vapour pressure was taken outside the fitted range of its curve.</summary>

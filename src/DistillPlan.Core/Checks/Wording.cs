@@ -57,6 +57,8 @@ public static partial class Wording
         ["solvent-loss/"] = new("Gas leaving the condenser at {coolant} carries {solvent_per_air} of solvent per g of leak air ({condensate_pressure} of {pressure} is solvent vapour).",
             "Use colder coolant, tighten leaks, and put a cold trap before the pump."),
 
+        ["coolant-limit/condensate"] = new("The first vapour is mostly {light} ({light_fraction} mole fraction): with the coolant at {coolant} it cannot be condensed at any pressure the heating limits allow (at most {pressure}, vapour {vapor}); uncondensed vapour would go to the pump.",
+            "Use a coolant at or below {needed_coolant} (a chiller, or dry ice in a cold-finger condenser), or evaporate the light component first at atmospheric pressure."),
         ["pump-limit/unreachable"] = new("The pressure {pressure} is below the pump's ultimate pressure {pump_ultimate}: the charge will not boil at {vapor}.",
             "Use a better pump (an oil pump with a cold trap), or accept a hotter bath if the heating medium and the product allow it."),
         ["pump-limit/close"] = new("The pressure {pressure} is close to the pump's ultimate pressure {pump_ultimate}: the pump may not hold it.",
@@ -71,16 +73,38 @@ public static partial class Wording
             "The distillate comes over near the azeotrope and the residue moves towards pure {side}. Evaporation alone cannot free {other} of {side}: use a drying agent, an entrainer or a solvent swap."),
         ["azeotrope/maximum"] = new("{first} and {second} form a maximum-boiling azeotrope at {azeotrope_mole_fraction} mole fraction {first}, {temperature} at {pressure}{basis}; evaporation cannot take the composition past it.",
             "The excess {side} distils first; the residue moves towards the azeotrope and then boils unchanged at its higher temperature. Evaporation alone cannot remove the rest."),
+        ["azeotrope/heterogeneous"] = new("{first} and {second} form a heteroazeotrope (two liquid layers) at {azeotrope_mole_fraction} mole fraction {first}, {temperature} at {pressure}{basis}: while both layers are in the pot the vapour comes over at this composition.",
+            "Azeotropic drying works (common practice): the vapour carries {second} over with {first} and the condensate separates into two layers in the receiver. Once one layer is gone the rest boils as one liquid."),
         ["azeotrope/not-evaluated"] = new("Azeotrope check not evaluated: {reason}.",
             "Look up the pair in an azeotrope table before relying on a clean separation."),
+
+        ["two-liquids/water"] = new("Two liquid phases in the pot at {vapor}: a {layer_a} layer ({layer_a_fraction} mole fraction {layer_a}, {layer_a_share} of the liquid) and a water layer ({layer_b_fraction} water, {layer_b_share}){basis}. While both layers are there the vapour composition is fixed ({vapor_a} {layer_a}, {vapor_b} water) and water comes off with the {layer_a}.",
+            "Expect a wet distillate that separates into two layers; azeotropic drying works this way (common practice). A two-layer pot bumps easily: rotate well, lower the pressure in the approach steps, use a bump trap."),
+        ["two-liquids/"] = new("Two liquid phases in the pot at {vapor}: a {layer_a} layer ({layer_a_fraction} mole fraction {layer_a}, {layer_a_share} of the liquid) and a {layer_b} layer ({layer_b_fraction} {layer_b}, {layer_b_share}){basis}. While both layers are there the vapour composition is fixed ({vapor_a} {layer_a}, {vapor_b} {layer_b}) and both come off together.",
+            "Expect a distillate that separates into two layers. A two-layer pot bumps easily: rotate well, lower the pressure in the approach steps, use a bump trap."),
+
+        ["pot-freezing/freezes"] = new("The pot boils at {vapor} at {pressure}, at or below the freezing limit of {solvent}, {melting_point}{estimate}: the pot freezes, stops evaporating and can crack the flask.",
+            "Keep the pot above {safe_vapor}: raise the pressure to at least {safe_pressure}, or use a different solvent plan."),
+        ["pot-freezing/near"] = new("The pot boils at {vapor} at {pressure}, less than 2 K above the freezing limit of {solvent}, {melting_point}{estimate}: crystals may form on the flask wall.",
+            "Keep the pot above {safe_vapor}: raise the pressure to at least {safe_pressure}."),
+        ["pot-freezing/not-evaluated"] = new("Pot-freezing check not evaluated: {reason}.",
+            "Watch the pot for crystals; keep it warmer than the highest melting point of its components if in doubt."),
 
         ["extrapolated-curve/"] = new("Vapour pressure of {solvents} was extrapolated beyond the fitted range of its curves (at {vapor} or {coolant}).",
             "Treat the setpoint as an estimate: approach it from above and watch the boiling."),
 
         // Notes: what the plan did and why (severity info).
         ["model/"] = new("{note}.", ""),
+        ["model/approximate"] = new("Model answer is {note}.", "Treat setpoints and the ramp as rough: approach the setpoint from above and watch the boiling."),
         ["no-vacuum-needed/"] = new("The charge boils at {boiling} at the local atmospheric pressure ({atmosphere}), at or below the preferred vapour temperature: no vacuum is needed; use a mild bath.", ""),
         ["pressure-ramp/"] = new("Hold the vapour at {vapor}: the pressure must fall from {from} to {to} as the light component leaves ({end}); the residue is then {residue_share} {residue}.", ""),
+        ["pressure-ramp/two-liquids"] = new("Hold the vapour at {vapor}: both liquid layers stay in the pot to the end ({end}), so the pressure stays at {from} (three-phase boiling); {first} leaves first and {residue} remains: the residue is then {residue_share} {residue}.", ""),
+        ["pressure-ramp/two-liquids-then-one"] = new("Hold the vapour at {vapor}: while both liquid layers are in the pot the pressure stays near {from} (three-phase boiling), then falls to {to} as one liquid ({end}); {first} leaves first and {residue} remains: the residue is then {residue_share} {residue}.", ""),
+        ["pressure-ramp/held-pressure"] = new("Hold the pressure at {from} while {first} leaves: the boiling temperature rises from {vapor} to {end_vapor} ({end}); the residue is then {residue_share} {residue}. Lower the pressure only once {first} is gone, or the condenser cannot hold it.", ""),
+        ["condensate-capture/raised"] = new("The first vapour is mostly {light} ({light_fraction} mole fraction); at the coolant {coolant} + {margin} its condensate boils at {condensate_pressure}, above {before} at {before_vapor}: the vapour temperature was raised to {vapor} and the setpoint to {pressure}, so the condenser captures it.",
+            "A colder coolant lets the plan run at a lower pressure."),
+        ["liquid-phases/one"] = new("One liquid phase in the pot at the setpoint: {basis}.", ""),
+        ["published-azeotrope/"] = new("{note}.", ""),
         ["strip-not-computed/"] = new("The pressure ramp could not be computed: {reason}. The setpoints still stand.", ""),
 
         // How a strip ended (StripPlanner).

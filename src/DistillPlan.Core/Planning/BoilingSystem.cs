@@ -7,7 +7,15 @@ namespace DistillPlan.Core.Planning;
 /// <param name="PressurePa">Pressure [Pa].</param>
 /// <param name="Vapor">Mole fractions of the first vapour, in component order.</param>
 /// <param name="Extrapolated">True when a vapour-pressure curve was used outside its fitted range.</param>
-public readonly record struct BubblePoint(double TemperatureK, double PressurePa, double[] Vapor, bool Extrapolated);
+/// <param name="LiquidPhases">The pot's liquid phases: null or one for a single liquid, two when it has split into layers
+/// (the pot then boils at the three-phase point and <paramref name="Vapor"/> is in equilibrium with both).</param>
+/// <param name="LiquidPhaseBasis">What decided the number of liquids (models that agreed, or a published fact), or null.</param>
+public readonly record struct BubblePoint(double TemperatureK, double PressurePa, double[] Vapor, bool Extrapolated,
+    IReadOnlyList<Mixtures.LiquidPhase>? LiquidPhases = null, string? LiquidPhaseBasis = null)
+{
+    /// <summary>True when two liquid layers are present.</summary>
+    public bool TwoLiquids => LiquidPhases is { Count: > 1 };
+}
 
 /// <summary>
 /// The vapour–liquid equilibrium a plan is computed with: a pure solvent, or a mixture with an

@@ -32,26 +32,47 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
     public BubblePoint BubbleTemperature(double pressurePa, double[] liquid) => ToBubble(Equilibrium.BubbleTemperature(pressurePa, liquid));
 
     private BubblePoint ToBubble(EquilibriumPoint p) =>
-        new(p.TemperatureK, p.PressurePa, Components.Select(s => p.Vapor[s.Name]).ToArray(), p.ExtrapolatedComponents.Count > 0);
+        new(p.TemperatureK, p.PressurePa, Components.Select(s => p.Vapor[s.Name]).ToArray(), p.ExtrapolatedComponents.Count > 0,
+            p.LiquidPhases, p.LiquidPhaseBasis);
+
+    /// <summary>Why the answer is approximate whatever the model (a carboxylic acid: vapour association not modelled), or null.</summary>
+    public string? ApproximationNote => Equilibrium.Model.ApproximationNote;
 
     /// <summary>
-    /// Azeotropes of every pair at a pressure, and the pairs whose search failed (with why, so
-    /// the plan can say "not evaluated" instead of dropping the check). Azeotropes closer than
-    /// 0.025 mole fraction to a pure component are left out: they change nothing a person can
-    /// see, and original UNIFAC predicts some there that do not exist (acetone–water at 0.98 acetone).
+    /// Azeotropes of every pair at a pressure, the pairs whose search failed (with why, so the
+    /// plan can say "not evaluated" instead of dropping the check), and what published facts said
+    /// about the pairs (the model overruled, or data only at other pressures). Azeotropes closer
+    /// than 0.025 mole fraction to a pure component are left out: they change nothing a person
+    /// can see, and original UNIFAC predicts some there that do not exist (acetone–water at 0.98 acetone).
     /// </summary>
-    public (IReadOnlyList<Azeotrope> Found, string? Problem) Azeotropes(double pressurePa)
+    public AzeotropeSurvey Azeotropes(double pressurePa)
     {
         var found = new List<Azeotrope>();
         var problems = new List<string>();
+        var notes = new List<string>();
         var parts = Equilibrium.Components;
         for (int i = 0; i < parts.Count; i++)
             for (int j = i + 1; j < parts.Count; j++)
             {
                 var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Equilibrium.Model.Requested);
-                try { found.AddRange(AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100).Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025)); }
+                try
+                {
+                    var result = AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100);
+                    found.AddRange(result.Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025));
+                    if (result.UsesPublishedValue && result.Note is string n) notes.Add($"{parts[i].Name}–{parts[j].Name}: {n}");
+                }
                 catch (DistillPlanException e) { problems.Add($"{parts[i].Name}–{parts[j].Name}: {e.Message}"); }
             }
-        return (found, problems.Count == 0 ? null : "the azeotrope search failed for " + string.Join("; ", problems));
+        return new(found, problems.Count == 0 ? null : "the azeotrope search failed for " + string.Join("; ", problems), notes);
     }
+}
+
+/// <summary>What an azeotrope search over every pair of a mixture found at one pressure.</summary>
+/// <param name="Found">Azeotropes (published values where the model was overruled, with their <see cref="Azeotrope.Source"/>).</param>
+/// <param name="Problem">Why the search failed for some pair, or null.</param>
+/// <param name="PublishedNotes">One sentence per pair where a published azeotrope or zeotrope overruled the model, with its citation.</param>
+public sealed record AzeotropeSurvey(IReadOnlyList<Azeotrope> Found, string? Problem, IReadOnlyList<string> PublishedNotes)
+{
+    /// <summary>Nothing found, nothing failed (a pure solvent).</summary>
+    public static AzeotropeSurvey None { get; } = new([], null, []);
 }

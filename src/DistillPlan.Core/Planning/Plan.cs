@@ -39,8 +39,14 @@ public sealed record Plan
     public required double[] StartVapor { get; init; }
     /// <summary>Limits that could not all be met (each is also a finding).</summary>
     public required IReadOnlyList<Conflict> Conflicts { get; init; }
+    /// <summary>False when the coolant cannot capture the first vapour at any pressure the limits allow (a finding says which coolant would).</summary>
+    public bool CondensateCaptured { get; init; } = true;
     /// <summary>False when no setpoint satisfies every limit; the findings say what to change.</summary>
-    public bool Feasible => Conflicts.Count == 0;
+    public bool Feasible => Conflicts.Count == 0 && CondensateCaptured;
+    /// <summary>The pot's liquid phases at the setpoint: one, or two layers (each composition and share).</summary>
+    public IReadOnlyList<Mixtures.LiquidPhase> StartLiquidPhases { get; init; } = [];
+    /// <summary>What decided the number of liquids at the setpoint (models that agreed, a published fact), or null.</summary>
+    public string? StartLiquidPhaseBasis { get; init; }
     /// <summary>The checks, most severe first.</summary>
     public required IReadOnlyList<Finding> Checks { get; init; }
     /// <summary>Every value the plan used, defaults marked.</summary>

@@ -12,7 +12,7 @@ namespace DistillPlan.Core.Planning;
 /// limit and the product, cap it at the boiling point at the local atmospheric pressure. This
 /// class is the one place each setpoint is decided.
 /// </summary>
-public static class SetpointPlanner
+public static partial class SetpointPlanner
 {
     /// <summary>Builds the plan for a charge from parsed settings.</summary>
     public static Plan Plan(Charge charge, IBoilingSystem system, PlanSetup setup) =>
@@ -38,6 +38,10 @@ public static class SetpointPlanner
         var pumpHold = PumpHold(equipment, rules);
         if (pumpHold < equipment.Atmosphere)
             lower.Add(("pump-limit", Temperature.FromKelvin(system.BubbleTemperature(pumpHold.Pascal, x).TemperatureK)));
+        // A frozen pot stops evaporating and can crack the flask: keep the boiling pot above its freezing limit.
+        var freezing = PotFreezing.Limit(system.Components, x);
+        if (freezing is not null)
+            lower.Add(("pot-freezing", Temperature.FromKelvin(freezing.LimitK + PotFreezing.MarginK)));
 
         var productMax = ProductMax(charge, rules);
         var upper = new List<(string Code, Temperature T)>
@@ -63,20 +67,44 @@ public static class SetpointPlanner
         else if (rules.PreferredVapor > high) (vapor, limiting) = (high, highCode);
         else (vapor, limiting) = (rules.PreferredVapor, "preferred-vapor-temperature");
 
+        // The condenser sees the vapour: for a mixture the first vapour may be far more volatile
+        // than the pot (a little ether in DMSO boils off as nearly pure ether). Raise the vapour
+        // temperature, and so the pressure, until that condensate is captured at coolant + margin.
+        var capture = system is MixtureBoilingSystem && conflicts.Count == 0
+            ? CondensateCapture.Decide(system, x, equipment.Coolant, vapor, high)
+            : null;
+        if (capture is { Captured: true, Raised: true }) (vapor, limiting) = (capture.Vapor, "condensate-capture");
+        else if (capture is { Captured: false }) (vapor, limiting) = (high, highCode);
+
         bool atmospheric = limiting == "atmospheric-boiling-point";
         var bubble = atmospheric ? atmosphericBoil : system.BubblePressure(vapor.Kelvin, x);
         var setpoint = atmospheric ? equipment.Atmosphere : Pressure.FromPascal(Math.Min(bubble.PressurePa, equipment.Atmosphere.Pascal));
         var bath = vapor + rules.BathToVapor;
         var condenserMax = vapor - rules.VaporToCondenser;
-
         var mixture = system as MixtureBoilingSystem;
-        var (azeotropes, azeotropeProblem) = mixture?.Azeotropes(setpoint.Pascal) ?? ([], null);
+        // The condensate, not the pot, sets how cold the condenser must be: below its bubble
+        // temperature at the setpoint, with the capture margin (docs/methods.md, Condenser capture).
+        if (mixture is not null) condenserMax = Temperature.Min(condenserMax, CondensateCapture.CondenserLimit(system, setpoint, bubble.Vapor) ?? condenserMax);
+
+        var survey = mixture?.Azeotropes(setpoint.Pascal) ?? AzeotropeSurvey.None;
         var context = new CheckContext(system, x, equipment, rules, vapor, bath, setpoint, condenserMax, bubble.Vapor,
-            bubble.Extrapolated || atmosphericBoil.Extrapolated, productMax, conflicts, azeotropes, azeotropeProblem);
-        var checks = PlanChecks.Evaluate(context);
+            bubble.Extrapolated || atmosphericBoil.Extrapolated, productMax, conflicts, survey.Found, survey.Problem,
+            bubble.LiquidPhases, bubble.LiquidPhaseBasis);
+        var checks = PlanChecks.Evaluate(context).ToList();
+        if (capture is { Captured: false })
+        {
+            checks.Add(CondensateCapture.ColderCoolantFinding(system, equipment.Coolant, setpoint, vapor, bubble.Vapor));
+            checks = [.. checks.OrderByDescending(f => f.Severity)];
+        }
 
         var notes = new List<Finding>();
         if (system.ModelNote is string note) notes.Add(Make("model", Severity.Info, "", ["model"], W("note", note)));
+        if (mixture?.ApproximationNote is string approximate) notes.Add(Make("model", Severity.Info, "approximate", ["model"], W("note", approximate)));
+        foreach (var published in survey.PublishedNotes) notes.Add(Make("published-azeotrope", Severity.Info, "", ["model"], W("note", published)));
+        if (!bubble.TwoLiquids && bubble.LiquidPhaseBasis is string oneLiquid)
+            notes.Add(Make("liquid-phases", Severity.Info, "one", ["model"], W("basis", oneLiquid)));
+        if (capture is { Captured: true, Raised: true })
+            notes.Add(CondensateCapture.RaisedNote(system, capture, equipment.Coolant, setpoint, bubble.Vapor));
         if (atmospheric)
             notes.Add(Make("no-vacuum-needed", Severity.Info, "", ["vapor-temp"], T("boiling", tbAtm), P("atmosphere", equipment.Atmosphere)));
 
@@ -94,6 +122,9 @@ public static class SetpointPlanner
             Approach = ApproachSteps(equipment.Atmosphere, setpoint),
             StartVapor = bubble.Vapor,
             Conflicts = conflicts,
+            CondensateCaptured = capture?.Captured ?? true,
+            StartLiquidPhases = bubble.LiquidPhases ?? [],
+            StartLiquidPhaseBasis = bubble.LiquidPhaseBasis,
             Checks = checks,
             Assumptions = [.. assumptions ?? [], .. FixedRules(rules)],
             Notes = notes,
@@ -103,7 +134,8 @@ public static class SetpointPlanner
         };
         if (mixture is null || atmospheric) return plan;
 
-        // A mixture's pressure ramp at the plan's vapour temperature, with the strip's own ends.
+        // A mixture's pressure ramp at the plan's vapour temperature, with the strip's own ends;
+        // held at the setpoint pressure instead when the condensate decided it (StripPlanner).
         // The setpoints stand without it; a failure is said, not dropped.
         StripPlan ramp;
         try { ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: 0.1); }
@@ -111,14 +143,27 @@ public static class SetpointPlanner
         {
             return plan with { Notes = [.. notes, Make("strip-not-computed", Severity.Caution, "", [], W("reason", e.Message))] };
         }
-        if (ramp.Steps.Count > 1)
-        {
-            var end = ramp.Steps[^1];
-            var heavy = end.Liquid.MaxBy(kv => kv.Value);
-            notes.Add(Make("pressure-ramp", Severity.Info, "", [], T("vapor", vapor), P("from", setpoint), P("to", end.Pressure),
-                W("end", ramp.EndText(Reports.DisplayFormat.Default)), (("residue_share"), Reports.Quantity.Percent(heavy.Value)), W("residue", heavy.Key)));
-        }
+        if (ramp.Steps.Count > 1) notes.Add(RampNote(ramp));
         return plan with { Ramp = ramp, Notes = notes };
+    }
+
+    /// <summary>
+    /// The ramp in one sentence: how the pressure (or, held at a pressure, the boiling temperature)
+    /// moves, which component leaves first (the largest share of its charge in the receiver) and
+    /// what remains.
+    /// </summary>
+    private static Finding RampNote(StripPlan ramp)
+    {
+        var start = ramp.Steps[0];
+        var end = ramp.Steps[^1];
+        var heavy = end.Liquid.MaxBy(kv => kv.Value);
+        string first = ramp.Setpoints.System.Components.Select(c => c.Name)
+            .MaxBy(n => end.DistillateMol.GetValueOrDefault(n) / Math.Max(ramp.ChargeMol.GetValueOrDefault(n), 1e-300))!;
+        string variant = ramp.Mode == Mixtures.StripMode.FixedPressure ? "held-pressure"
+            : start.LiquidPhases.Count > 1 ? (end.LiquidPhases.Count > 1 ? "two-liquids" : "two-liquids-then-one") : "";
+        return Make("pressure-ramp", Severity.Info, variant, [], T("vapor", start.Vapor), T("end_vapor", end.Vapor), P("from", start.Pressure), P("to", end.Pressure),
+            W("end", ramp.EndText(Reports.DisplayFormat.Default)), W("first", first),
+            (("residue_share"), Reports.Quantity.Percent(heavy.Value)), W("residue", heavy.Key));
     }
 
     /// <summary>The lowest pressure the pump can hold: twice its ultimate (common practice).</summary>

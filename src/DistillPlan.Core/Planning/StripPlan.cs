@@ -18,7 +18,11 @@ namespace DistillPlan.Core.Planning;
 public sealed record StripStepPlan(double Evaporated, Pressure Pressure, Temperature Vapor, Temperature Bath,
     IReadOnlyDictionary<string, double> Liquid, IReadOnlyDictionary<string, double> VaporComposition,
     IReadOnlyDictionary<string, double> DistillateMol, IReadOnlyDictionary<string, double> ResidueMol,
-    IReadOnlyList<Finding> Findings);
+    IReadOnlyList<Finding> Findings)
+{
+    /// <summary>The pot's liquid phases here: one, or two layers (each composition and share) while the pot is in the two-liquid region.</summary>
+    public IReadOnlyList<LiquidPhase> LiquidPhases { get; init; } = [];
+}
 
 /// <summary>
 /// A batch strip as planned: how it is held, every step with its checks, where and why it ends.

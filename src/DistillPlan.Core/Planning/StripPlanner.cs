@@ -64,7 +64,10 @@ public static class StripPlanner
         var hold = SetpointPlanner.PumpHold(equipment, plan.Rules);
         var hottestBath = plan.ProductMax is Temperature pm ? Temperature.Min(equipment.HeatingMax, pm) : equipment.HeatingMax;
         StripResult result;
-        if (request.FixedPressure is Pressure p)
+        // A plan whose setpoint the condensate decided holds that pressure: at its vapour
+        // temperature the pressure would fall below what the condenser can capture.
+        var fixedPressure = request.FixedPressure ?? (plan.LimitingConstraint == "condensate-capture" ? plan.VacuumSetpoint : null);
+        if (fixedPressure is Pressure p)
         {
             if (p < hold)
                 throw new InputException("--pressure", PressureUnits.Format(p, PressureUnits.Millibar),
@@ -113,7 +116,7 @@ public static class StripPlanner
             var bath = fixedT ? plan.Bath : vapor + plan.Rules.BathToVapor;
             return new StripStepPlan(evaporated, Pressure.FromPascal(s.PressurePa), vapor, bath,
                 Renormalised(s.Liquid, names), Renormalised(s.Vapor, names),
-                s.DistillateMol, s.ResidueMol, []);
+                s.DistillateMol, s.ResidueMol, []) { LiquidPhases = s.LiquidPhases };
         }
         var steps = result.Steps.Select(ToStep).ToList();
 
@@ -121,8 +124,7 @@ public static class StripPlanner
         var overall = steps.Count == 0 ? plan.Checks
             : fixedT ? plan.Checks
             : Check(plan, steps[0], withAzeotropes: true);
-        var seen = new Dictionary<string, Severity>();
-        foreach (var f in overall) seen[f.Identity] = seen.TryGetValue(f.Identity, out var was) && was > f.Severity ? was : f.Severity;
+        var seen = overall.GroupBy(f => f.Identity).ToDictionary(g => g.Key, g => g.Max(f => f.Severity));
         for (int k = 0; k < steps.Count; k++)
         {
             var found = Check(plan, steps[k], withAzeotropes: false).ToList();
@@ -152,9 +154,10 @@ public static class StripPlanner
         var components = plan.System.Components;
         double[] x = components.Select(s => step.Liquid.GetValueOrDefault(s.Name)).ToArray();
         double[] y = components.Select(s => step.VaporComposition.GetValueOrDefault(s.Name)).ToArray();
-        var (azeotropes, problem) = withAzeotropes && plan.System is MixtureBoilingSystem m ? m.Azeotropes(step.Pressure.Pascal) : ([], null);
+        var survey = withAzeotropes && plan.System is MixtureBoilingSystem m ? m.Azeotropes(step.Pressure.Pascal) : AzeotropeSurvey.None;
         var context = new CheckContext(plan.System, x, plan.Equipment, plan.Rules, step.Vapor, step.Bath, step.Pressure,
-            step.Vapor - plan.Rules.VaporToCondenser, y, false, plan.ProductMax, [], azeotropes, problem);
+            step.Vapor - plan.Rules.VaporToCondenser, y, false, plan.ProductMax, [], survey.Found, survey.Problem,
+            step.LiquidPhases.Count > 0 ? step.LiquidPhases : null);
         return PlanChecks.Evaluate(context);
     }
 

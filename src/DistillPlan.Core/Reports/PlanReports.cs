@@ -22,9 +22,17 @@ public static class PlanReports
             new("Approach in steps", p.Approach.Select(Quantity.Of).ToList(), "approach") { Joiner = " → ", IsList = true },
             new("Feasible", Quantity.Flag(p.Feasible), "feasible") { MachineOnly = p.Feasible },
         };
+        bool twoLiquids = p.StartLiquidPhases.Count > 1;
+        setpoints.Add(new("Liquid phases", Quantity.Number(Math.Max(1, p.StartLiquidPhases.Count)), "liquid_phases")
+        {
+            MachineOnly = !twoLiquids,
+            Note = twoLiquids ? "two liquid phases (layers) in the pot at the setpoint" : null,
+        });
         var sections = new List<Section> { new("Setpoints", setpoints, []) };
         if (p.Ramp is StripPlan ramp && ramp.Steps.Count > 1)
             sections.Add(new Section("Pressure ramp", [], [StepsTable(ramp, "ramp")]));
+        // After the ramp, so the ramp stays the report's main table (CSV).
+        if (twoLiquids) sections.Add(new Section("Two liquid phases", [], [PhasesTable(p.StartLiquidPhases, names)]));
 
         var header = new List<Row>
         {
@@ -125,6 +133,16 @@ public static class PlanReports
                 .. all.Select(n => Quantity.Number(st.ResidueMol[n], "mol")),
             ], st.Findings)).ToList();
         return new Table(jsonKey, columns, rows);
+    }
+
+    /// <summary>The pot's liquid layers: each one's share of the liquid and its mole fractions (JSON <c>phases</c>).</summary>
+    public static Table PhasesTable(IReadOnlyList<Mixtures.LiquidPhase> phases, IReadOnlyList<string> names)
+    {
+        var columns = new List<Column> { new("Share of the liquid", QuantityKind.Percent, "share") { ShortHeader = "Share" } };
+        columns.AddRange(names.Select(n => new Column($"x {n}", QuantityKind.MoleFraction, "mole_fractions", n) { ShortHeader = "x " + Short(n) }));
+        var rows = phases.Select(ph => new TableRow(
+            [Quantity.Percent(ph.Share), .. names.Select(n => Quantity.MoleFraction(ph.MoleFractions.GetValueOrDefault(n)))], [])).ToList();
+        return new Table("phases", columns, rows);
     }
 
     private static string Short(string name) => name.Length <= 8 ? name : name[..7] + ".";

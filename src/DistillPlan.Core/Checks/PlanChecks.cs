@@ -48,6 +48,7 @@ public static class PlanChecks
         Add(found, HeldAtLimit(c, "bath-limit", c.Equipment.HeatingMax, Heating));
         if (c.ProductMax is Temperature pm) Add(found, HeldAtLimit(c, "product-limit", pm, ["product-max"]));
         Add(found, ExtrapolatedCurve(c));
+        foreach (var s in present) Add(found, EstimatedCurve(s));
         if (c.AzeotropeProblem is string why) found.Add(NotEvaluated("azeotrope", why, []));
         foreach (var a in c.Azeotropes) found.Add(AzeotropeCheck(a, c));
         return found.OrderByDescending(f => f.Severity).ToList();
@@ -76,31 +77,43 @@ public static class PlanChecks
             : Make("condenser-freeze", Severity.Caution, "near", Coolant, values);
     }
 
+    /// <summary>Heater surfaces run hotter than the bath or jacket they heat [K] (rule of thumb, from memory; docs/methods.md, Safety checks).</summary>
+    public const double HeaterSurfaceMarginK = 20;
+
     /// <summary>
-    /// autoignition: bath or jacket near the autoignition temperature (NFPA 497 / IEC 60079-20-1).
-    /// Hot surfaces are kept below 80 % of the autoignition temperature in °C (from memory, after EN 1127-1).
+    /// autoignition: bath or jacket near the autoignition temperature (the lower of NFPA 497 and
+    /// IEC 60079-20-1). A danger when the bath plus the heater-surface margin, or the heating
+    /// medium's own limit, reaches it; a warning when the hottest surface is within 80 % of it in
+    /// °C (from memory, after EN 1127-1).
     /// </summary>
     public static Finding? Autoignition(Solvent s, CheckContext c)
     {
         if (s.AutoignitionK is not double ait)
-            return s.FlashPointK is null ? null
-                : NotEvaluated("autoignition", $"no published autoignition temperature for {s.Name}", Heating, W("solvent", s.Name));
-        var hottest = Temperature.Max(c.Bath, c.Equipment.HeatingMax);
-        var values = new[] { W("solvent", s.Name), T("bath", c.Bath), T("hottest", hottest), TK("autoignition", ait) };
+            return Missing(s.AutoignitionRecord, s.AutoignitionMissingReason, "autoignition", Heating, s);
+        var hottest = Temperature.Max(c.Bath + new TemperatureDifference(HeaterSurfaceMarginK), c.Equipment.HeatingMax);
+        var values = new[] { W("solvent", s.Name), T("bath", c.Bath), T("hottest", hottest), TK("autoignition", ait), DT("margin", HeaterSurfaceMarginK) };
         if (c.Bath.Kelvin >= ait) return Make("autoignition", Severity.Danger, "at-bath", Heating, values);
+        if (hottest.Kelvin >= ait) return Make("autoignition", Severity.Danger, "surfaces", Heating, values);
         if (hottest.Celsius >= 0.8 * (ait - PhysicalConstants.ZeroCelsiusK)) return Make("autoignition", Severity.Warning, "near", Heating, values);
         return null;
     }
 
-    /// <summary>flammable-exhaust: flash point below room temperature means flammable vapour at the pump exhaust.</summary>
+    /// <summary>flammable-exhaust: a flash point below the pump exhaust's temperature means flammable vapour at the exhaust.</summary>
     public static Finding? FlammableExhaust(Solvent s, CheckContext c)
     {
         if (s.FlashPointK is not double fp)
-            return s.AutoignitionK is null ? null
-                : NotEvaluated("flammable-exhaust", $"no published flash point for {s.Name}", ["exhaust-temp"], W("solvent", s.Name));
+            return Missing(s.FlashPointRecord, s.FlashPointMissingReason, "flammable-exhaust", ["exhaust-temp"], s);
         if (fp >= c.Equipment.Ambient.Kelvin) return null;
         return Make("flammable-exhaust", Severity.Warning, "", ["exhaust-temp"], W("solvent", s.Name), TK("flash_point", fp), T("ambient", c.Equipment.Ambient));
     }
+
+    /// <summary>
+    /// A flammability figure the library lacks: "not evaluated" with why, never a silent pass.
+    /// Only a stated reason the figure does not exist (water does not burn) answers the check.
+    /// </summary>
+    private static Finding? Missing(FlammabilityRecord record, string? why, string code, string[] settings, Solvent s) =>
+        record.Reason is not null && record.Unpublished ? null
+            : NotEvaluated(code, $"{why ?? "not recorded in the library"} for {s.Name}", settings, W("solvent", s.Name));
 
     /// <summary>toxic-vapor: vapours that must go to extraction.</summary>
     public static Finding? ToxicVapor(Solvent s) =>
@@ -285,6 +298,12 @@ public static class PlanChecks
         return Make("extrapolated-curve", Severity.Caution, "", [],
             W("solvents", string.Join(", ", outside.DefaultIfEmpty("the charge"))), T("vapor", c.Vapor), T("coolant", c.Equipment.Coolant));
     }
+
+    /// <summary>estimated-curve: the vapour pressure rests on an estimate, not a published curve; the setpoint carries its error.</summary>
+    public static Finding? EstimatedCurve(Solvent s) =>
+        s.VaporPressure.EstimatedErrorPercent is double error
+            ? Make("estimated-curve", Severity.Caution, "", [], W("solvent", s.Name), W("note", s.EstimatedCurveNote!), N("error", error, "%"))
+            : null;
 
     /// <summary>bumping-risk in a strip: the pressure falls by half or more within one step.</summary>
     public static Finding? PressureStep(Pressure before, Pressure after) =>

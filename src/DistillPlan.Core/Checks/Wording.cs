@@ -31,14 +31,16 @@ public static partial class Wording
 
         ["autoignition/at-bath"] = new("The bath at {bath} is at or above the autoignition temperature of {solvent} ({autoignition}).",
             "Do not run: vapour touching the bath or heater can ignite without a spark. Lower the bath well below the autoignition temperature."),
+        ["autoignition/surfaces"] = new("Heater surfaces can reach {hottest} (the bath plus {margin}, or the heating medium's limit), at or above the autoignition temperature of {solvent} ({autoignition}).",
+            "Do not run with this heating: limit the medium well below the autoignition temperature (a lower --bath-max and a cut-out), keep vapour away from heating elements, or use a different heating medium."),
         ["autoignition/near"] = new("The heating medium may reach {hottest}, within 80 % of the autoignition temperature of {solvent} ({autoignition}).",
             "Limit the heater to well below the autoignition temperature; keep vapour away from hot plates and heating elements."),
-        ["autoignition/not-evaluated"] = new("Autoignition check not evaluated: {reason}.",
+        ["autoignition/not-evaluated"] = new("Autoignition check not evaluated: autoignition temperature {reason}.",
             "Look up the autoignition temperature in the SDS and keep every heated surface well below it."),
 
         ["flammable-exhaust/"] = new("{solvent} has a flash point of {flash_point}, below the pump exhaust temperature ({ambient}): the exhaust carries flammable vapour.",
             "Vent the pump exhaust to extraction; keep ignition sources away; use a pump rated for flammable vapours."),
-        ["flammable-exhaust/not-evaluated"] = new("Flash-point check not evaluated: {reason}.",
+        ["flammable-exhaust/not-evaluated"] = new("Flash-point check not evaluated: flash point {reason}.",
             "Look up the flash point in the SDS; until then treat the pump exhaust as flammable and vent it to extraction."),
 
         ["toxic-vapor/"] = new("{solvent} vapour is toxic.",
@@ -90,6 +92,8 @@ public static partial class Wording
         ["pot-freezing/not-evaluated"] = new("Pot-freezing check not evaluated: {reason}.",
             "Watch the pot for crystals; keep it warmer than the highest melting point of its components if in doubt."),
 
+        ["estimated-curve/"] = new("{note}; the setpoint carries that uncertainty.",
+            "Approach the setpoint from above and watch the boiling; with a few measured points of your own, fit a curve (distillplan fit) and use it instead."),
         ["extrapolated-curve/"] = new("Vapour pressure of {solvents} was extrapolated beyond the fitted range of its curves (at {vapor} or {coolant}).",
             "Treat the setpoint as an estimate: approach it from above and watch the boiling."),
 

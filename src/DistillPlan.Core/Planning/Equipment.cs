@@ -44,8 +44,8 @@ public sealed record Equipment
     public Temperature HeatingMax { get; init; } = Temperature.FromCelsius(95);
     /// <summary>Local atmospheric pressure.</summary>
     public Pressure Atmosphere { get; init; } = Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
-    /// <summary>Room temperature at the pump exhaust, for the flash-point check.</summary>
-    public Temperature Ambient { get; init; } = Temperature.FromCelsius(20);
+    /// <summary>Gas temperature at the pump exhaust, for the flash-point check (warmer than the room).</summary>
+    public Temperature Ambient { get; init; } = Temperature.FromCelsius(40);
 
     /// <summary>A pump kind in words ("diaphragm pump").</summary>
     public static string Word(PumpKind kind) => kind switch

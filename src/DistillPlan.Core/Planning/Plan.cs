@@ -47,6 +47,8 @@ public sealed record Plan
     public IReadOnlyList<Mixtures.LiquidPhase> StartLiquidPhases { get; init; } = [];
     /// <summary>What decided the number of liquids at the setpoint (models that agreed, a published fact), or null.</summary>
     public string? StartLiquidPhaseBasis { get; init; }
+    /// <summary>True when the pump can hold the setpoint (at least twice its ultimate pressure).</summary>
+    public bool SetpointReachable => VacuumSetpoint >= SetpointPlanner.PumpHold(Equipment, Rules) || AtAtmosphericPressure;
     /// <summary>The checks, most severe first.</summary>
     public required IReadOnlyList<Finding> Checks { get; init; }
     /// <summary>Every value the plan used, defaults marked.</summary>

@@ -16,7 +16,14 @@ public static class PlanReports
         {
             new("Bath / heating", Quantity.Of(p.Bath), "bath_temperature"),
             new("Vapour temperature", Quantity.Of(p.Vapor), "vapor_temperature") { Note = "set by: " + p.LimitingConstraint },
-            new("Vacuum setpoint", Quantity.Of(p.VacuumSetpoint), "vacuum_setpoint") { Note = p.AtAtmosphericPressure ? "no vacuum needed" : null },
+            // A pressure the pump cannot hold is never presented as the setpoint (see the conflict).
+            p.SetpointReachable
+                ? new("Vacuum setpoint", Quantity.Of(p.VacuumSetpoint), "vacuum_setpoint") { Note = p.AtAtmosphericPressure ? "no vacuum needed" : null }
+                : new("Vacuum needed", Quantity.Of(p.VacuumSetpoint), "vacuum_setpoint")
+                {
+                    Note = "NOT REACHABLE with this pump; see pump-limit and the conflict below",
+                },
+            new("Setpoint reachable", Quantity.Flag(p.SetpointReachable), "setpoint_reachable") { MachineOnly = true },
             new("Condenser at most", Quantity.Of(p.CondenserMax), "condenser_max") { Note = "coolant " + p.Equipment.Coolant },
             new("Boils at ambient", Quantity.Of(p.AtmosphericBoilingPoint), "atmospheric_boiling_temperature") { Note = null },
             new("Approach in steps", p.Approach.Select(Quantity.Of).ToList(), "approach") { Joiner = " → ", IsList = true },

@@ -160,7 +160,9 @@ public sealed class PlannerViewModel
     {
         if (Outcome.Plan is not Plan p)
             return ("Bath  --    Vapour  --    Vacuum  --    Condenser  --", "Cannot plan: " + Outcome.Error);
-        string vacuum = p.AtAtmosphericPressure ? P(p.VacuumSetpoint) + " (none needed)" : P(p.VacuumSetpoint);
+        string vacuum = p.AtAtmosphericPressure ? P(p.VacuumSetpoint) + " (none needed)"
+            : p.SetpointReachable ? P(p.VacuumSetpoint)
+            : "NOT REACHABLE";
         string feasible = p.Feasible ? "" : "NOT FEASIBLE: see the conflict | ";
         return ($"Bath {p.Bath}   Vapour {p.Vapor}   Vacuum {vacuum}   Condenser <= {p.CondenserMax}",
                 // Checks first, charge last: on a narrow screen the long mixture description is what gets cut.

@@ -115,10 +115,10 @@ public static class PlanSettings
         new()
         {
             Key = "exhaust-temp", Label = "pump exhaust temperature", Caption = "Exhaust temp:", Group = SettingGroup.Equipment,
-            Help = "Temperature of the gas at the pump exhaust, for the flash-point check (default 20 °C, the room).",
+            Help = "Temperature of the gas at the pump exhaust, for the flash-point check (default 40 °C: exhausts run warmer than the room).",
             Apply = (b, v) => b.Equipment = b.Equipment with { Ambient = ReadTemperature(v, "--exhaust-temp", -40, 150) },
             Value = b => Quantity.Of(b.Equipment.Ambient),
-            DefaultBasis = _ => "a laboratory at 20 °C, " + CommonPractice,
+            DefaultBasis = _ => "a pump exhaust runs tens of kelvin above a 20 °C room; rule of thumb, from memory",
         },
         new()
         {

@@ -86,6 +86,11 @@ public static class CliApp
             error.WriteLine("distillplan: " + e.Message);
             return BadInput;
         }
+        catch (Output.OutputUnwritableException e)
+        {
+            error.WriteLine("distillplan: " + e.Message);
+            return InternalError;
+        }
         catch (Exception e)
         {
             error.WriteLine($"distillplan: internal error: {e.GetType().Name}: {e.Message.Split('\n')[0]} (please report it)");

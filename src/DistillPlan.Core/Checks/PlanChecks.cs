@@ -170,7 +170,7 @@ public static class PlanChecks
     /// <summary>A conflict of limits, as one finding named after the limit that won.</summary>
     public static Finding ConflictFinding(Conflict k)
     {
-        string code = k.UpperCode is "bath-limit" or "product-limit" ? k.UpperCode : k.LowerCode == "coolant" ? "coolant-limit" : "pump-limit";
+        string code = Wording.ConflictCode(k.LowerCode, k.UpperCode);
         string[] settings = [.. SettingsOf(k.LowerCode), .. SettingsOf(k.UpperCode), "delta-t"];
         return Make(code, Severity.Warning, $"conflict:{k.LowerCode}:{k.UpperCode}", settings,
             T("needed", k.Lower), T("allowed", k.Upper), T("vapor", k.Chosen));
@@ -182,6 +182,7 @@ public static class PlanChecks
         "pump-limit" => PumpSettings,
         "bath-limit" => Heating,
         "product-limit" => ["product-max"],
+        "pot-freezing" => ["vapor-temp"],
         _ => [],
     };
 

@@ -125,6 +125,7 @@ public static partial class Wording
     {
         ["coolant"] = "the coolant needs a vapour temperature of at least {needed} (coolant + ΔT)",
         ["pump-limit"] = "the pump can only hold pressures that boil the charge at {needed} or above",
+        ["pot-freezing"] = "the pot must boil at {needed} or above to stay clear of its freezing point",
     };
 
     private static readonly Dictionary<string, string> ConflictAllows = new()
@@ -138,8 +139,9 @@ public static partial class Wording
     public static IEnumerable<string> Keys => Entries.Keys.Concat(
         from low in ConflictNeeds.Keys from high in ConflictAllows.Keys select $"{ConflictCode(low, high)}/conflict:{low}:{high}");
 
-    private static string ConflictCode(string low, string high) =>
-        high is "bath-limit" or "product-limit" ? high : low == "coolant" ? "coolant-limit" : "pump-limit";
+    /// <summary>A conflict is reported under the code of the limit that won, or else of the bound it broke.</summary>
+    internal static string ConflictCode(string low, string high) =>
+        high is "bath-limit" or "product-limit" ? high : low == "coolant" ? "coolant-limit" : low;
 
     /// <summary>The finding's message, its numbers in the display format.</summary>
     public static string Message(Finding f, DisplayFormat format)
@@ -160,7 +162,12 @@ public static partial class Wording
             var parts = f.Variant.Split(':');
             var remedies = new List<string>
             {
-                parts[1] == "coolant" ? "colder coolant (a chiller, or dry ice in a cold-finger condenser)" : "a better pump (lower ultimate pressure)",
+                parts[1] switch
+                {
+                    "coolant" => "colder coolant (a chiller, or dry ice in a cold-finger condenser)",
+                    "pot-freezing" => "a higher limit for the bath or the product, so the pot can stay liquid",
+                    _ => "a better pump (lower ultimate pressure)",
+                },
             };
             if (parts[2] == "bath-limit") remedies.Add("a heating medium with a higher limit (oil bath or jacket)");
             if (parts[2] != "atmospheric-boiling-point") remedies.Add("smaller ΔT steps (--delta-t)");

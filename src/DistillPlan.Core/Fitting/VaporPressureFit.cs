@@ -5,7 +5,7 @@ using MathNet.Numerics.Optimization;
 namespace DistillPlan.Core.Fitting;
 
 /// <summary>
-/// Fits a vapour-pressure curve to a user's measured (T, P) points (docs/methods.md, Fitting):
+/// Fits a vapour-pressure curve to a user's measured (T, P) points (docs/methods.md, Vapour pressure: Fitting):
 /// <list type="bullet">
 /// <item>Antoine, log10(P/Pa) = A − B/(T/K + C): Levenberg–Marquardt (MathNet.Numerics) on log10 P,
 /// started from the Clausius–Clapeyron line, with C held in [−0.8·Tmin, 0] K so that the implied

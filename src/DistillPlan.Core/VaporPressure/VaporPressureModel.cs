@@ -26,7 +26,7 @@ public readonly record struct TsatResult(double TemperatureK, double PressurePa,
 /// Where the answering curve changes, published curves disagree by a few per cent; so that
 /// P(T) has no step there, ln P is blended over a hand-over band on the side where both curves
 /// are valid, with a smooth weight in 1/T (<see cref="HandOverBand"/>; docs/methods.md,
-/// Pure-component vapour pressure). Outside every range the nearest curve's edge is extended
+/// Vapour pressure). Outside every range the nearest curve's edge is extended
 /// with Clausius–Clapeyron (ln P linear in 1/T, slope taken at the edge) and the result is
 /// flagged extrapolated. Above the critical temperature it refuses. T(P) is the exact inverse
 /// of P(T), which rises strictly.

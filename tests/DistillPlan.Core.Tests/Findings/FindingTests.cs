@@ -18,6 +18,8 @@ public class FindingTests
         "coolant-temp=-20;pump=rotary-vane;heating=oil-bath",
         "coolant-temp=25;pump=aspirator;product-max=45",
         "coolant-temp=40;heating=jacket;bath-max=90;pump=liquid-ring;delta-t=25,20",
+        // A cold coolant and a low product limit: the pot-freezing bound is the one that loses (tert-butanol, DMSO, water).
+        "coolant-temp=-20;product-max=40",
     };
 
     [Theory]

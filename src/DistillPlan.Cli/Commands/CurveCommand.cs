@@ -44,10 +44,16 @@ internal static class CurveCommand
                 var atmosphere = atmospheric.Read(r).Build().Equipment.Atmosphere;
                 var p = PressureUnits.Parse(atText, "--at", atmosphere);
                 var t = solvent.VaporPressure.SaturationTemperature(p.Pascal);
+                // Below the melting point the liquid is frozen: the solid sublimes, nothing boils.
+                bool frozen = solvent.MeltingPointK is double tm && t.TemperatureK < tm;
                 if (json)
-                    J.Write(o, J.Obj(("solvent", solvent.Name), ("boiling_temperature_c", J.N(t.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
+                    J.Write(o, J.Obj(("solvent", solvent.Name), ("boiling_temperature_c", frozen ? null : J.N(t.TemperatureK - PhysicalConstants.ZeroCelsiusK)),
                         ("pressure_mbar", J.N(p.Millibar, 4)), ("source", library.Cite(t.Curve.Source)), ("source_key", t.Curve.Source),
-                        ("form", t.Curve.Form), ("extrapolated", t.Extrapolated), ("range_c", Range(t.Curve))));
+                        ("form", t.Curve.Form), ("extrapolated", t.Extrapolated), ("range_c", Range(t.Curve)),
+                        ("frozen", frozen), ("melting_point_c", J.N(solvent.MeltingPointK - PhysicalConstants.ZeroCelsiusK, 2))));
+                else if (frozen)
+                    o.WriteLine($"{solvent.Name} would be frozen at {PressureUnits.Format(p, unit)}: the liquid's curve reaches it only at " +
+                                $"{Temperature.FromKelvin(t.TemperatureK)}, below the melting point {Temperature.FromKelvin(solvent.MeltingPointK!.Value)}; the solid sublimes, nothing boils.");
                 else
                     o.WriteLine($"{solvent.Name} boils at {Temperature.FromKelvin(t.TemperatureK)} at {PressureUnits.Format(p, unit)}" +
                                 $"{(t.Extrapolated ? "  (EXTRAPOLATED beyond the fitted range)" : "")}\n  curve: {t.Curve.Form}, {library.Cite(t.Curve.Source)}");
@@ -57,10 +63,15 @@ internal static class CurveCommand
             {
                 var t = TemperatureUnits.Parse(tempText, "--temp");
                 var p = solvent.VaporPressure.SaturationPressure(t.Kelvin);
+                bool frozen = solvent.MeltingPointK is double tm && t.Kelvin < tm;
                 if (json)
                     J.Write(o, J.Obj(("solvent", solvent.Name), ("vapor_pressure_mbar", J.N(p.PressurePa / 100, 5)), ("temperature_c", J.N(t.Celsius)),
                         ("source", library.Cite(p.Curve.Source)), ("source_key", p.Curve.Source), ("form", p.Curve.Form),
-                        ("extrapolated", p.Extrapolated), ("range_c", Range(p.Curve))));
+                        ("extrapolated", p.Extrapolated), ("range_c", Range(p.Curve)),
+                        ("frozen", frozen), ("melting_point_c", J.N(solvent.MeltingPointK - PhysicalConstants.ZeroCelsiusK, 2))));
+                else if (frozen)
+                    o.WriteLine($"{solvent.Name} is frozen at {t} (melting point {Temperature.FromKelvin(solvent.MeltingPointK!.Value)}): " +
+                                $"the liquid's vapour pressure there would be {PressureUnits.Format(Pressure.FromPascal(p.PressurePa), unit)} (supercooled liquid, an extrapolation); the solid's is lower.");
                 else
                     o.WriteLine($"{solvent.Name} vapour pressure at {t}: {PressureUnits.Format(Pressure.FromPascal(p.PressurePa), unit)}" +
                                 $"{(p.Extrapolated ? "  (EXTRAPOLATED beyond the fitted range)" : "")}\n  curve: {p.Curve.Form}, {library.Cite(p.Curve.Source)}");

@@ -67,11 +67,28 @@ public static class CliApp
         var parse = root.Parse(args);
         if (parse.Errors.Count > 0)
         {
-            string verb = parse.CommandResult.Command == root ? "" : " " + parse.CommandResult.Command.Name;
-            error.WriteLine($"distillplan: {parse.Errors[0].Message} (see distillplan{verb} --help)");
+            var command = parse.CommandResult.Command;
+            string verb = command == root ? "" : " " + command.Name;
+            error.WriteLine($"distillplan: {Describe(parse.Errors[0].Message, command)} (see distillplan{verb} --help)");
             return BadInput;
         }
         return Guard(() => parse.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false }), error);
+    }
+
+    /// <summary>
+    /// A parse error in the one-line style: a missing argument is named with what it expects,
+    /// instead of the parser's "Required argument missing for command".
+    /// </summary>
+    private static string Describe(string parserMessage, Command command)
+    {
+        if (parserMessage.StartsWith("Required argument missing", StringComparison.Ordinal))
+        {
+            var missing = command.Arguments.Where(a => a.Arity.MinimumNumberOfValues > 0).ToList();
+            return "missing " + string.Join(" and ", missing.Select(a => $"<{a.Name}> ({a.Description?.Split('.')[0]})"));
+        }
+        if (parserMessage.StartsWith("Required command was not provided", StringComparison.Ordinal))
+            return "give a verb: " + string.Join(", ", command.Subcommands.Select(c => c.Name));
+        return parserMessage.TrimEnd('.');
     }
 
     /// <summary>Runs an action and maps the exception family to one line and an exit code.</summary>

@@ -8,8 +8,15 @@ public abstract class DistillPlanException(string message, Exception? inner = nu
 /// is allowed, in one line, so the CLI can print it as it is and exit with code 2.
 /// </summary>
 public class InputException(string field, string value, string allowed, string? message = null)
-    : DistillPlanException(message ?? $"{field}: '{value}' is not valid; expected {allowed}")
+    : DistillPlanException(message ?? $"{field}: '{Shorten(value)}' is not valid; expected {allowed}")
 {
+    /// <summary>A value as it is quoted in a message: long ones are cut, so one line stays one line.</summary>
+    public static string Shorten(string value)
+    {
+        string oneLine = value.ReplaceLineEndings(" ");
+        return oneLine.Length <= 60 ? oneLine : $"{oneLine[..40]}… ({value.Length} characters)";
+    }
+
     /// <summary>The option, argument or file field the bad value came from.</summary>
     public string Field { get; } = field;
     /// <summary>The value as the user wrote it.</summary>
@@ -21,7 +28,7 @@ public class InputException(string field, string value, string allowed, string? 
 /// <summary>A solvent name, alias or CAS number that the library does not hold.</summary>
 public sealed class UnknownSolventException(string name, IReadOnlyList<string> suggestions)
     : InputException("solvent", name, "a name, alias or CAS number of the library",
-        $"solvent: '{name}' is not in the library; " + (suggestions.Count > 0
+        $"solvent: '{Shorten(name)}' is not in the library; " + (suggestions.Count > 0
             ? $"nearest names: {string.Join(", ", suggestions)}"
             : "`distillplan solvents` lists the names"))
 {

@@ -64,7 +64,7 @@ public static class PressureUnits
 
     /// <summary>What the parser accepts, for error messages.</summary>
     public const string AllowedText =
-        "a number with a unit: Pa, hPa, mbar, kPa, MPa, bar, Torr, mmHg, inHg, psia, atm (absolute), " +
+        "a number with a unit: mPa, Pa, hPa, mbar, kPa, MPa, bar, Torr, mmHg, inHg, psia, atm (absolute), " +
         "barg, mbarg, kPag, psig (gauge), inHgV (inches of mercury vacuum); a bare number is mbar";
 
     /// <summary>The display unit for a symbol given to <c>--unit</c>.</summary>
@@ -95,8 +95,13 @@ public static class PressureUnits
     public static Pressure Parse(string text, string field, Pressure atmosphere)
     {
         var (number, unitText) = QuantityText.Split(text, field, AllowedText);
+        // Case decides between milli- and mega-pascal: "mPa" is a thousandth of a pascal, "MPa" a
+        // million; any other spelling of the two is refused rather than guessed.
+        if (unitText.Equals("mpa", StringComparison.OrdinalIgnoreCase) && unitText is not ("mPa" or "MPa"))
+            throw new InputException(field, text, "mPa (millipascal) or MPa (megapascal), written with that case");
         double pascal;
         if (unitText.Length == 0) pascal = number * Millibar.Pascal;
+        else if (unitText == "mPa") pascal = number * 1e-3;
         else if (Absolute.TryGetValue(unitText, out var abs)) pascal = number * abs.Pascal;
         else if (Gauge.TryGetValue(unitText, out var g)) pascal = atmosphere.Pascal + number * g.Pascal;
         else if (Vacuum.TryGetValue(unitText, out var v)) pascal = atmosphere.Pascal - number * v.Pascal;

@@ -90,6 +90,16 @@ public sealed class FitVerbTests : IDisposable
     }
 
     [Fact]
+    public void The_command_line_prints_the_layout_the_text_UI_shows()
+    {
+        var r = CliRunner.Run("fit", "toluene-lab", "--points", "40C:78.887mbar,80C:388.311mbar");
+        var fit = DistillPlan.Tui.Model.CompoundFit.Make("toluene-lab",
+            [(313.15, 7888.7), (353.15, 38831.1)], DistillPlan.Core.Fitting.FitForm.Auto, false, null);
+        string shared = DistillPlan.Tui.Model.FitText.Text(fit, DistillPlan.Core.Quantities.PressureUnits.Millibar);
+        Assert.StartsWith(shared + "\n", r.Output.Replace("\r\n", "\n"));
+    }
+
+    [Fact]
     public void One_boiling_point_is_a_Trouton_estimate_and_says_so()
     {
         // Ethanol: CRC normal boiling point 78.29 °C; an alcohol, so Trouton's 109 J/(mol K).

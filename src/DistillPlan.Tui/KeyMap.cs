@@ -18,6 +18,10 @@ public static class KeyMap
     public static readonly Key[] Panes = [Key.F2, Key.F3, Key.F4, Key.F5, Key.F6];
     /// <summary>Next pressure unit.</summary>
     public static readonly Key Unit = Key.F7;
+    /// <summary>Fit your own compound from measured points.</summary>
+    public static readonly Key Fit = Key.F8;
+    /// <summary>How <see cref="Fit"/> is written.</summary>
+    public const string FitKeyText = "F8";
     /// <summary>Open a plan file.</summary>
     public static readonly Key Open = Key.O.WithCtrl;
     /// <summary>Save the plan.</summary>
@@ -35,6 +39,7 @@ public static class KeyMap
         new(Panes[3], "F5", "Curve: vapour pressure; O setpoint, C condenser, P pump"),
         new(Panes[4], "F6", "Ramp: strip ramp as a table and a plot"),
         new(Unit, "F7", "Next pressure unit (mbar, hPa, Pa, kPa, bar, Torr ...)", "Unit"),
+        new(Fit, FitKeyText, "Fit your own compound from measured points; add it to your library", "Fit"),
         new(Save, "Ctrl+S", "Save the plan (asks before replacing a file)", "Save"),
         new(Open, "Ctrl+O", "Open a plan file", "Open"),
         new(Quit, "Ctrl+Q", "Quit (asks first if there are unsaved changes)", "Quit"),

@@ -7,6 +7,7 @@ using Terminal.Gui.Input;
 namespace DistillPlan.Tui.Tests;
 
 /// <summary>The planner screen driven through Terminal.Gui's ANSI driver at a fixed size, read back as text.</summary>
+[Collection(TerminalCollection.Name)]
 public sealed class HeadlessPlannerTests : IDisposable
 {
     private readonly IApplication _app;

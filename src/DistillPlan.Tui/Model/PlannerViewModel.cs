@@ -36,7 +36,15 @@ public sealed class PlannerViewModel
     }
 
     /// <summary>The solvent library.</summary>
-    public SolventLibrary Library { get; }
+    public SolventLibrary Library { get; private set; }
+
+    /// <summary>Plans with a reloaded library (after the user added a compound to theirs), keeping the document.</summary>
+    public void UseLibrary(SolventLibrary library)
+    {
+        Library = library;
+        Outcome = Compute(Document);
+        Changed?.Invoke();
+    }
     /// <summary>What the user has entered.</summary>
     public PlanDocument Document { get; private set; }
     /// <summary>The latest plan, or why there is none.</summary>

@@ -24,10 +24,13 @@ public sealed class PlannerWindow : Window
     private readonly CurvePane _curve = new();
     private readonly RampPane _ramp = new();
     private readonly HelpOverlay _help = new();
+    private readonly FitOverlay _fit;
     private readonly View[] _panes;
 
     /// <summary>A planner screen over a view model.</summary>
-    public PlannerWindow(PlannerViewModel vm)
+    /// <param name="vm">The plan.</param>
+    /// <param name="userLibraryPath">Where the fit form adds compounds (default: the per-user library).</param>
+    public PlannerWindow(PlannerViewModel vm, string? userLibraryPath = null)
     {
         _vm = vm;
         Title = "DistillPlan";
@@ -47,7 +50,9 @@ public sealed class PlannerWindow : Window
 
         var bar = new StatusBar(KeyMap.All.Where(k => k.InStatusBar is not null && k.Key is not null)
             .Select(k => new Shortcut(k.Key!, k.InStatusBar!, () => Handle(k.Key!))));
-        Add(_readout, _tabs, bar, _help);
+        _fit = new FitOverlay(new FitFormModel(userLibraryPath ?? Core.Library.SolventLibrary.DefaultUserPath), () => _vm.Unit);
+        _fit.Added += vm.UseLibrary;
+        Add(_readout, _tabs, bar, _help, _fit);
 
         KeyDown += (_, key) => { if (Handle(key)) key.Handled = true; };
         vm.Changed += ShowAll;
@@ -65,6 +70,7 @@ public sealed class PlannerWindow : Window
 
     private bool Handle(Key key)
     {
+        if (key == KeyMap.Fit || (key == Key.Esc && _fit.Visible)) { ToggleFit(); return true; }
         if (key == KeyMap.Help || (key == Key.Esc && _help.Visible)) { ToggleHelp(); return true; }
         int pane = Array.FindIndex(KeyMap.Panes, k => k == key);
         if (pane >= 0) { ShowPane(_panes[pane]); return true; }
@@ -78,14 +84,23 @@ public sealed class PlannerWindow : Window
     private void ShowPane(View pane)
     {
         _help.Visible = false;
+        _fit.Visible = false;
         _tabs.Value = pane;
         if (pane == _charge) FocusSearch(); else pane.SetFocus();
     }
 
     private void ToggleHelp()
     {
+        _fit.Visible = false;
         _help.Visible = !_help.Visible;
         if (_help.Visible) _help.SetFocus(); else CurrentPane.SetFocus();
+        SetNeedsDraw();
+    }
+
+    private void ToggleFit()
+    {
+        _help.Visible = false;
+        if (_fit.Visible) { _fit.Visible = false; CurrentPane.SetFocus(); } else _fit.Open();
         SetNeedsDraw();
     }
 

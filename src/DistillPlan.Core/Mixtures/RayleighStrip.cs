@@ -225,7 +225,23 @@ internal sealed class RayleighStrip
         return du;
     }
 
+    // The last few evaluations, newest first. Dormand–Prince evaluates its seventh stage at the
+    // step's own result (first same as last), the accepted step is then evaluated there again, the
+    // next step's first stage is that same state, and every trial step of the event location
+    // starts with the same first stage: each repeat is a full bubble point with a stability test.
+    private readonly Snapshot?[] _recent = new Snapshot?[4];
+
     private Snapshot Evaluate(double s, double[] u)
+    {
+        foreach (var known in _recent)
+            if (known is not null && known.S == s && known.U.AsSpan().SequenceEqual(u)) return known;
+        var snapshot = EvaluateNew(s, (double[])u.Clone());
+        Array.Copy(_recent, 0, _recent, 1, _recent.Length - 1);
+        _recent[0] = snapshot;
+        return snapshot;
+    }
+
+    private Snapshot EvaluateNew(double s, double[] u)
     {
         var liquid = new double[_n];
         for (int i = 0; i < _n; i++) liquid[i] = Math.Max(u[i], 0.0); // a trial stage may overshoot a tiny amount
@@ -233,7 +249,7 @@ internal sealed class RayleighStrip
         {
             // With two liquids the vapour is the three-phase one (heteroazeotrope while both layers last).
             var x = _equilibrium.Normalise(liquid, "liquid");
-            var (p, y, _, split) = _equilibrium.BubblePressureWithPhases(_setpoint, x);
+            var (p, y, _, split) = _equilibrium.BubblePressureWithPhases(_setpoint, x, phasesOnly: true);
             return new Snapshot(s, u, _setpoint, p, x, y) { Phases = split.Phases };
         }
 

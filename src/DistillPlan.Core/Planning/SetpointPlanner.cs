@@ -138,7 +138,7 @@ public static partial class SetpointPlanner
         // held at the setpoint pressure instead when the condensate decided it (StripPlanner).
         // The setpoints stand without it; a failure is said, not dropped.
         StripPlan ramp;
-        try { ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: 0.1); }
+        try { ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: StripPlanner.RampReportEvery); }
         catch (DistillPlanException e)
         {
             return plan with { Notes = [.. notes, Make("strip-not-computed", Severity.Caution, "", [], W("reason", e.Message))] };

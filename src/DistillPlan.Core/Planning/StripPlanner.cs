@@ -29,6 +29,11 @@ public static class StripPlanner
     /// <param name="reportEvery">Report a step each time this further fraction has evaporated.</param>
     public static StripPlan Plan(Plan plan, StripRequest request, string? model = null, double reportEvery = 0.05)
     {
+        // The setpoint planner already planned a mixture's ramp with these very inputs: the text UI
+        // asks for it again after every edit, and it is the costliest part of a plan.
+        if (plan.Ramp is { } known && IsRampRequest(request, reportEvery)
+            && BoilingSystems.ParseModel(model ?? ModelOf(plan)) == BoilingSystems.ParseModel(ModelOf(plan)))
+            return known with { Setpoints = plan };
         var charge = plan.Charge;
         var solvents = charge.Components.Select(c => c.Solvent).ToList();
         var components = solvents.Select(MixtureComponent.FromSolvent).ToList();
@@ -90,6 +95,12 @@ public static class StripPlanner
         }
         return Describe(plan, result, solvents, volumes, peroxide, hold, hottestBath, options);
     }
+
+    /// <summary>The request and report interval the setpoint planner uses for a mixture's ramp.</summary>
+    internal const double RampReportEvery = 0.1;
+
+    internal static bool IsRampRequest(StripRequest request, double reportEvery)
+        => request.FixedPressure is null && request.End.Kind == StripEndKind.Default && reportEvery == RampReportEvery;
 
     private static string? ModelOf(Plan plan) => plan.System is MixtureBoilingSystem m ? Mixtures.ActivityModelChoice.NameOf(m.Equilibrium.Model.Requested) : null;
 

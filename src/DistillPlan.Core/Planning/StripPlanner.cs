@@ -46,7 +46,10 @@ public static class StripPlanner
             components.Add(MixtureComponent.NonVolatile("product", product.MolarMassGPerMol));
             amounts.Add(product.Moles);
         }
-        var equilibrium = PhaseEquilibrium.Create(components, BoilingSystems.ParseModel(model ?? ModelOf(plan)));
+        var requested = BoilingSystems.ParseModel(model ?? ModelOf(plan));
+        var equilibrium = components.Count == 1
+            ? new PhaseEquilibrium(components, Mixtures.ActivityModelChoice.PureLiquid(requested))
+            : PhaseEquilibrium.Create(components, requested);
         bool volumes = solvents.All(s => s.MolarVolumeM3PerMol is not null);
         var peroxide = solvents.Where(s => s.PeroxideClass != PeroxideClass.None).Select(s => s.Name).ToList();
 

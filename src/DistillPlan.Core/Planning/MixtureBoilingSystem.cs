@@ -31,6 +31,11 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
     /// <inheritdoc />
     public BubblePoint BubbleTemperature(double pressurePa, double[] liquid) => ToBubble(Equilibrium.BubbleTemperature(pressurePa, liquid));
 
+    /// <summary>Bubble pressure [Pa] of a liquid at T, honouring a split, without the point's
+    /// other parts (for drawing a curve: one liquid is settled by UNIFAC-LLE first where it can,
+    /// which gives the same pressure sooner).</summary>
+    public double BubblePressurePa(double temperatureK, double[] liquid) => Equilibrium.BubblePressurePa(temperatureK, liquid);
+
     private BubblePoint ToBubble(EquilibriumPoint p) =>
         new(p.TemperatureK, p.PressurePa, Components.Select(s => p.Vapor[s.Name]).ToArray(), p.ExtrapolatedComponents.Count > 0,
             p.LiquidPhases, p.LiquidPhaseBasis);

@@ -27,11 +27,11 @@ public static class StripPlanner
     /// <param name="request">Fixed pressure or fixed vapour temperature, and the end.</param>
     /// <param name="model">The activity model asked for (null: the default).</param>
     /// <param name="reportEvery">Report a step each time this further fraction has evaporated.</param>
-    public static StripPlan Plan(Plan plan, StripRequest request, string? model = null, double reportEvery = 0.05)
+    public static StripPlan Plan(Plan plan, StripRequest request, string? model = null, double reportEvery = DefaultReportEvery)
     {
         // The setpoint planner already planned a mixture's ramp with these very inputs: the text UI
         // asks for it again after every edit, and it is the costliest part of a plan.
-        if (plan.Ramp is { } known && IsRampRequest(request, reportEvery)
+        if (plan.Ramp is { } known && IsRampRequest(request) && known.ReportEvery == reportEvery
             && BoilingSystems.ParseModel(model ?? ModelOf(plan)) == BoilingSystems.ParseModel(ModelOf(plan)))
             return known with { Setpoints = plan };
         var charge = plan.Charge;
@@ -99,11 +99,15 @@ public static class StripPlanner
         return Describe(plan, result, solvents, volumes, peroxide, hold, hottestBath, options);
     }
 
-    /// <summary>The request and report interval the setpoint planner uses for a mixture's ramp.</summary>
-    internal const double RampReportEvery = 0.1;
+    /// <summary>The report interval of a mixture plan's own ramp (the text UI's ramp pane).</summary>
+    public const double RampReportEvery = 0.1;
 
-    internal static bool IsRampRequest(StripRequest request, double reportEvery)
-        => request.FixedPressure is null && request.End.Kind == StripEndKind.Default && reportEvery == RampReportEvery;
+    /// <summary>The report interval of <c>distillplan strip</c>.</summary>
+    public const double DefaultReportEvery = 0.05;
+
+    // What the setpoint planner asks for a mixture's ramp: held at the vapour temperature, default end.
+    private static bool IsRampRequest(StripRequest request)
+        => request.FixedPressure is null && request.End.Kind == StripEndKind.Default;
 
     private static string? ModelOf(Plan plan) => plan.System is MixtureBoilingSystem m ? Mixtures.ActivityModelChoice.NameOf(m.Equilibrium.Model.Requested) : null;
 
@@ -160,6 +164,7 @@ public static class StripPlanner
             Model = result.Model,
             ModelNote = result.FallbackReason ?? result.ModelNote,
             ChargeMol = result.ChargeMol,
+            ReportEvery = options.ReportEveryEvaporatedFraction,
         };
     }
 

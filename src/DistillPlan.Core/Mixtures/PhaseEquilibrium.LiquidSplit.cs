@@ -27,7 +27,9 @@ public sealed partial class PhaseEquilibrium
     public bool DetectLiquidSplit { get; init; } = true;
 
     /// <summary>The published facts that overrule the models (the shipped table by default).</summary>
-    public PublishedMixtureFacts Facts { get; init; } = PublishedMixtureFacts.Shipped;
+    public PublishedMixtureFacts Facts { get => _facts ??= PublishedMixtureFacts.Shipped; init => _facts = value; }
+
+    private PublishedMixtureFacts? _facts; // read on first use: a pure liquid never needs the table
 
     /// <summary>
     /// The liquid phases of a liquid at temperature T: one (the whole liquid) or two, with each

@@ -24,6 +24,7 @@ public class PlanBenchmarks
     private const string Pure = "ethyl-acetate";
     private const string Binary = "ethanol=90,water=10";
     private const string Ternary = "acetone=50,ethanol=30,toluene=20";
+    private const string WetTernary = "ethyl-acetate=60,ethanol=25,water=15";
     private const string StripCharge = "thf=12L,toluene=3L";
 
     [GlobalSetup]
@@ -65,6 +66,14 @@ public class PlanBenchmarks
     /// <summary>A whole text-UI keystroke for the ternary: plan, report, curve picture, ramp and its report.</summary>
     [Benchmark]
     public PlanOutcome TernaryKeystroke() => _planner.Compute(new PlanDocument { Charge = Ternary });
+
+    /// <summary>A wet extract (two liquids possible): setpoints and the ramp.</summary>
+    [Benchmark]
+    public StripPlan WetTernaryPlanWithRamp() => PlanWithRamp(WetTernary);
+
+    /// <summary>A whole text-UI keystroke for the wet extract.</summary>
+    [Benchmark]
+    public PlanOutcome WetTernaryKeystroke() => _planner.Compute(new PlanDocument { Charge = WetTernary });
 
     /// <summary>`distillplan azeotrope ethanol water` at 1013.25 mbar.</summary>
     [Benchmark]

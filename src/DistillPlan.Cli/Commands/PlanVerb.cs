@@ -47,11 +47,11 @@ internal sealed class PlanVerb
     }
 
     /// <summary>Plans the document: the same calls as the text UI.</summary>
-    public static (Plan Plan, PlanSetup Setup) Plan(PlanDocument doc, SolventLibrary library)
+    public static (Plan Plan, PlanSetup Setup) Plan(PlanDocument doc, SolventLibrary library, double rampReportEvery = StripPlanner.RampReportEvery)
     {
         var (charge, setup) = doc.Build(library);
         var system = BoilingSystems.For(charge, setup.Model);
-        return (SetpointPlanner.Plan(charge, system, setup), setup);
+        return (SetpointPlanner.Plan(charge, system, setup, rampReportEvery), setup);
     }
 
     public static ReportContext Context(PlanDocument doc, SolventLibrary library) =>

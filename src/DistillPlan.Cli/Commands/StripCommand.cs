@@ -20,7 +20,8 @@ internal static class StripCommand
         {
             var library = verb.Common.LoadLibrary(r);
             var doc = verb.Document(r);
-            var (plan, setup) = PlanVerb.Plan(doc, library);
+            // The plan's own ramp is then this strip when the strip is the default one (planned once).
+            var (plan, setup) = PlanVerb.Plan(doc, library, StripPlanner.DefaultReportEvery);
             var strip = StripPlanner.Plan(plan, setup.Strip, setup.Model);
             verb.Write(r, PlanReports.ForStrip(strip, PlanVerb.Context(doc, library)), doc);
             return CliApp.Ok;

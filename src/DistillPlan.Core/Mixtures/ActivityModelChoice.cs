@@ -105,6 +105,17 @@ public sealed record ActivityModelChoice(
         return new(new IdealSolution(components.Count), requested, because, null) { Reason = because, ApproximationNote = acids };
     }
 
+    /// <summary>
+    /// The model of a single pure liquid: its activity coefficient is 1 in every model, so no
+    /// parameter table is read (a pure solvent's ramp stays as quick to start as its setpoints).
+    /// It carries the requested model's name; the acid note does not apply (a pure acid's
+    /// vapour pressure is measured, association and all).
+    /// </summary>
+    /// <param name="requested">The model asked for.</param>
+    public static ActivityModelChoice PureLiquid(ActivityModelKind requested)
+        => new(IdealSolution.PureLiquid(NameOf(requested)), requested, null, null)
+        { Reason = "one pure liquid: its activity coefficient is 1 in every model" };
+
     private static ActivityModelChoice Build(IReadOnlyList<MixtureComponent> components, UnifacParameters table,
         UnifacCoverage coverage, ActivityModelKind requested, string? fallback, string reason, string? acids)
     {

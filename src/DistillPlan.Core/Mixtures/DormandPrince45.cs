@@ -31,9 +31,43 @@ internal static class DormandPrince45
     private static readonly double[] B5MinusB4 =
         [71.0 / 57600, 0, -71.0 / 16695, 71.0 / 1920, -17253.0 / 339200, 22.0 / 525, -1.0 / 40];
 
+    // Dense output (Hairer, Nørsett, Wanner, Solving ODEs I, 2nd ed., §II.6, the dopri5 code; from memory):
+    // a fourth-order interpolant over the step from the same seven stages.
+    private static readonly double[] D =
+    [
+        -12715105075.0 / 11282082432, 0, 87487479700.0 / 32700410799, -10690763975.0 / 1880347072,
+        701980252875.0 / 199316789632, -1453857185.0 / 822651844, 69997945.0 / 29380423,
+    ];
+
     /// <summary>Advances u' = f(t, u) from t by h.</summary>
     /// <returns>The fifth-order solution at t + h and the local error estimate.</returns>
     public static (double[] Next, double[] Error) Step(Func<double, double[], double[]> f, double t, double[] u, double h)
+    {
+        var (next, error, _) = StepWithStages(f, t, u, h);
+        return (next, error);
+    }
+
+    /// <summary>The state at t + θh, 0 ≤ θ ≤ 1, inside a step from t by h (fourth order), from the
+    /// step's start <paramref name="u"/>, result <paramref name="next"/> and stages <paramref name="k"/>.</summary>
+    public static double[] Interpolate(double[] u, double[] next, double[][] k, double h, double theta)
+    {
+        var result = new double[u.Length];
+        double rest = 1 - theta;
+        for (int i = 0; i < u.Length; i++)
+        {
+            double r2 = next[i] - u[i];
+            double r3 = h * k[0][i] - r2;
+            double r4 = r2 - h * k[6][i] - r3;
+            double r5 = 0;
+            for (int stage = 0; stage < 7; stage++) r5 += D[stage] * k[stage][i];
+            r5 *= h;
+            result[i] = u[i] + theta * (r2 + rest * (r3 + theta * (r4 + rest * r5)));
+        }
+        return result;
+    }
+
+    /// <summary>As <see cref="Step"/>, also returning the seven stages (for <see cref="Interpolate"/>).</summary>
+    public static (double[] Next, double[] Error, double[][] Stages) StepWithStages(Func<double, double[], double[]> f, double t, double[] u, double h)
     {
         int n = u.Length;
         var k = new double[7][];
@@ -54,6 +88,6 @@ internal static class DormandPrince45
                 next[i] += h * B5[stage] * k[stage][i];
                 error[i] += h * B5MinusB4[stage] * k[stage][i];
             }
-        return (next, error);
+        return (next, error, k);
     }
 }

@@ -45,7 +45,7 @@ internal static class LiquidStability
             if (z[k] <= 0) continue;
             // Near-pure start: 0.999 of component k, the rest in the feed's proportions.
             for (int i = 0; i < n; i++) w[i] = z[i] > 0 ? (i == k ? 0.999 : 0.001 * z[i] / (1 - z[k] + 1e-300)) : 0;
-            if (Iterate(model, temperatureK, d, w, lnGamma) is not { } sum) continue;
+            if (Iterate(model, temperatureK, z, d, w, lnGamma) is not { } sum) continue;
             if (sum <= bestSum) continue;
             var trial = Normalised(w);
             if (MaxDifference(trial, z) < Trivial) continue; // collapsed onto the feed
@@ -56,12 +56,17 @@ internal static class LiquidStability
     }
 
     /// <summary>Successive substitution of the stationarity condition; returns ΣW at convergence
-    /// or null when it did not settle.</summary>
-    private static double? Iterate(IActivityModel model, double temperatureK, double[] d, double[] w, Span<double> lnGamma)
+    /// or null when it did not settle. A trial that is settling onto the feed itself (the trivial
+    /// solution, which the caller discards) stops there instead of converging to 1e-10: for a
+    /// liquid that does not split every start ends so, slowly, and that was most of a bubble
+    /// point's cost. Settling means within <see cref="CollapseDistance"/> of the feed with the
+    /// steps still shrinking; an unstable feed repels the iteration, so its steps grow there.</summary>
+    private static double? Iterate(IActivityModel model, double temperatureK, double[] z, double[] d, double[] w, Span<double> lnGamma)
     {
         int n = w.Length;
         Span<double> x = stackalloc double[n];
-        double sum = 0;
+        double sum = 0, previousChange = double.PositiveInfinity;
+        int shrinking = 0;
         for (int iteration = 0; iteration < 300; iteration++)
         {
             double total = 0;
@@ -79,6 +84,9 @@ internal static class LiquidStability
             }
             if (!double.IsFinite(sum)) return null;
             if (change < 1e-10) return sum;
+            shrinking = change < previousChange ? shrinking + 1 : 0;
+            previousChange = change;
+            if (shrinking >= 3 && IsNearFeed(w, sum, z)) return sum;
         }
         return sum; // slow convergence near a plait point: use where it got to
     }
@@ -166,6 +174,17 @@ internal static class LiquidStability
             b = next;
         }
         return b;
+    }
+
+    /// <summary>A settling trial this close to the feed (max |Δx|) is the trivial solution; well
+    /// inside <see cref="Trivial"/>, the distance at which the caller discards a trial.</summary>
+    private const double CollapseDistance = 1e-7;
+
+    private static bool IsNearFeed(double[] w, double sum, double[] z)
+    {
+        for (int i = 0; i < w.Length; i++)
+            if (Math.Abs(w[i] / sum - z[i]) >= CollapseDistance) return false;
+        return true;
     }
 
     /// <summary>Largest |a_i − b_i|.</summary>

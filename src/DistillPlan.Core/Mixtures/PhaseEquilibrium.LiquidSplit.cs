@@ -27,7 +27,9 @@ public sealed partial class PhaseEquilibrium
     public bool DetectLiquidSplit { get; init; } = true;
 
     /// <summary>The published facts that overrule the models (the shipped table by default).</summary>
-    public PublishedMixtureFacts Facts { get; init; } = PublishedMixtureFacts.Shipped;
+    public PublishedMixtureFacts Facts { get => _facts ??= PublishedMixtureFacts.Shipped; init => _facts = value; }
+
+    private PublishedMixtureFacts? _facts; // read on first use: a pure liquid never needs the table
 
     /// <summary>
     /// The liquid phases of a liquid at temperature T: one (the whole liquid) or two, with each
@@ -39,17 +41,34 @@ public sealed partial class PhaseEquilibrium
         => Split(temperatureK, Normalise(liquid, nameof(liquid)), useWarmStart: false);
 
     /// <summary>The split at T of normalised x (see the class remarks for the rule).</summary>
-    internal LiquidPhaseSplit Split(double temperatureK, double[] x, bool useWarmStart = true)
+    /// <param name="temperatureK">Temperature [K].</param>
+    /// <param name="x">Normalised liquid mole fractions.</param>
+    /// <param name="useWarmStart">Start the flash from the last split found (a strip's path).</param>
+    /// <param name="phasesOnly">The caller uses only the phases, not the basis sentence (a strip
+    /// step): where UNIFAC-LLE finds the liquid stable the answer is one liquid whatever the
+    /// vapour–liquid model says (its split would be overruled), so that test is asked first and
+    /// the costlier vapour–liquid test and flash are skipped.</param>
+    internal LiquidPhaseSplit Split(double temperatureK, double[] x, bool useWarmStart = true, bool phasesOnly = false)
     {
         var model = Model.Model;
         if (!DetectLiquidSplit || model is IdealSolution) return Single(temperatureK, x, null);
 
         (double[] PhaseI, double[] PhaseII, double ShareI)? flash = null;
         bool confirmed = false;
+        bool? lleUnstable = null;
         if (useWarmStart && _lastSplit is { } last)
         {
             flash = LiquidStability.Flash(model, temperatureK, x, last.PhaseI, last.PhaseII, maxIterations: 200);
             confirmed = flash is not null; // on the path of a split already confirmed
+        }
+        if (flash is null && phasesOnly && LleModel() is { } lleFirst)
+        {
+            lleUnstable = LiquidStability.UnstableTrial(lleFirst, temperatureK, x) is not null;
+            if (lleUnstable == false)
+            {
+                _lastSplit = null;
+                return Single(temperatureK, x, null);
+            }
         }
         if (flash is null)
         {
@@ -93,7 +112,7 @@ public sealed partial class PhaseEquilibrium
             basis = _lastBasis ?? "two liquids";
         else if (lle is null)
             basis = $"two liquids: {Describe(model)} alone (UNIFAC-LLE cannot be used here: {_lleMissing})";
-        else if (LiquidStability.UnstableTrial(lle, temperatureK, x) is not null)
+        else if (lleUnstable ?? LiquidStability.UnstableTrial(lle, temperatureK, x) is not null)
             basis = $"two liquids: {Describe(model)} and UNIFAC-LLE agree";
         else
         {
@@ -145,9 +164,9 @@ public sealed partial class PhaseEquilibrium
     /// <summary>Bubble pressure at T honouring a split: with two liquids, that of phase I (the same
     /// as phase II's in the model).</summary>
     internal (double PressurePa, double[] Y, double[] Gamma, LiquidPhaseSplit Split) BubblePressureWithPhases(
-        double temperatureK, double[] x)
+        double temperatureK, double[] x, bool phasesOnly = false)
     {
-        var split = Split(temperatureK, x);
+        var split = Split(temperatureK, x, phasesOnly: phasesOnly);
         var (p, y, gamma) = BubblePressureCore(temperatureK, split.IsSplit ? split.Phases[0].X : x);
         return (p, y, gamma, split);
     }

@@ -81,6 +81,17 @@ public sealed partial class PhaseEquilibrium
         return Point(SaturationKind.BubblePoint, temperatureK, p, x, y, gamma, split);
     }
 
+    /// <summary>Bubble pressure [Pa] of a liquid at temperature T, honouring a split (the same
+    /// pressure as <see cref="BubblePressure"/>, sooner: only the phases are settled, not why).</summary>
+    /// <param name="temperatureK">Temperature [K].</param>
+    /// <param name="liquid">Liquid amounts or mole fractions in component order.</param>
+    public double BubblePressurePa(double temperatureK, IReadOnlyList<double> liquid)
+    {
+        var x = Normalise(liquid, nameof(liquid));
+        RequireVolatile(x, "bubble pressure");
+        return BubblePressureWithPhases(temperatureK, x, phasesOnly: true).PressurePa;
+    }
+
     /// <summary>Bubble temperature of a liquid at pressure P.</summary>
     /// <param name="pressurePa">Pressure [Pa].</param>
     /// <param name="liquid">Liquid amounts or mole fractions in component order.</param>

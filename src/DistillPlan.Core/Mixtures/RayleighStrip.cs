@@ -114,9 +114,10 @@ internal sealed class RayleighStrip
             h = Math.Min(h, _dryS - current.S);
             Snapshot trial;
             double errorNorm;
+            double[][] stages;
             try
             {
-                var (next, error) = DormandPrince45.Step(Derivative, current.S, current.U, h);
+                (var next, var error, stages) = DormandPrince45.StepWithStages(Derivative, current.S, current.U, h);
                 errorNorm = ErrorNorm(current.U, next, error, absoluteTolerance);
                 trial = errorNorm <= 1 ? Evaluate(current.S + h, next) : current;
             }
@@ -145,7 +146,7 @@ internal sealed class RayleighStrip
             }
 
             // Move exactly to the earliest event in this step and act on every event reached there.
-            var located = crossed.Select(e => (Event: e, H: Locate(e, current, h))).MinBy(p => p.H);
+            var located = crossed.Select(e => (Event: e, H: Locate(e, current, trial, stages, h))).MinBy(p => p.H);
             current = Evaluate(current.S + located.H, DormandPrince45.Step(Derivative, current.S, current.U, located.H).Next);
             var reached = events.Where(e => e == located.Event || e.Remaining(current) <= EventTolerance).ToList();
             var end = reached.FirstOrDefault(e => e.EndReason is not null);
@@ -205,12 +206,41 @@ internal sealed class RayleighStrip
     }
 
     /// <summary>Step length in (0, h] at which the event's remaining distance reaches zero.</summary>
-    private double Locate(StripEvent e, Snapshot from, double h)
+    /// <remarks>The root is that of a real step of that length (the state the strip moves to), to
+    /// h·1e-12. A trial step costs six equilibrium evaluations, so the root is first found on the
+    /// step's dense output (one evaluation per trial), then polished by secant steps on real steps
+    /// (usually two); Brent on real steps over the whole step is the fallback.</remarks>
+    private double Locate(StripEvent e, Snapshot from, Snapshot to, double[][] stages, double h)
     {
-        double Remaining(double length) =>
+        double Real(double length) =>
             e.Remaining(Evaluate(from.S + length, DormandPrince45.Step(Derivative, from.S, from.U, length).Next));
-        if (Remaining(h) == 0) return h;
-        return Brent.TryFindRoot(Remaining, 0.0, h, Math.Max(h * 1e-12, MinimumStep), 200, out double root) ? root : h;
+        double Dense(double length) =>
+            e.Remaining(Evaluate(from.S + length, DormandPrince45.Interpolate(from.U, to.U, stages, h, length / h)));
+        double tolerance = Math.Max(h * 1e-12, MinimumStep);
+        if (e.Remaining(to) == 0) return h;
+        if (Polished(Real, Dense, h, tolerance) is { } polished) return polished;
+        return Brent.TryFindRoot(Real, 0.0, h, tolerance, 200, out double root) ? root : h;
+    }
+
+    private static double? Polished(Func<double, double> real, Func<double, double> dense, double h, double tolerance)
+    {
+        if (!Brent.TryFindRoot(dense, 0.0, h, tolerance, 200, out double length)) return null;
+        double delta = Math.Max(h * 1e-6, 16 * tolerance);
+        double other = length - delta > 0 ? length - delta : length + delta;
+        double slope = (dense(other) - dense(length)) / (other - length);
+        double r = real(length);
+        for (int iteration = 0; iteration < 8; iteration++)
+        {
+            if (r == 0) return length;
+            if (!(slope != 0) || !double.IsFinite(slope)) return null;
+            double next = length - r / slope;
+            if (!(next > 0 && next <= h)) return null;
+            if (Math.Abs(next - length) <= tolerance) return next;
+            double rNext = real(next);
+            slope = (rNext - r) / (next - length);
+            (length, r) = (next, rNext);
+        }
+        return null;
     }
 
     private double[] Derivative(double s, double[] u)
@@ -225,7 +255,23 @@ internal sealed class RayleighStrip
         return du;
     }
 
+    // The last few evaluations, newest first. Dormand–Prince evaluates its seventh stage at the
+    // step's own result (first same as last), the accepted step is then evaluated there again, the
+    // next step's first stage is that same state, and every trial step of the event location
+    // starts with the same first stage: each repeat is a full bubble point with a stability test.
+    private readonly Snapshot?[] _recent = new Snapshot?[4];
+
     private Snapshot Evaluate(double s, double[] u)
+    {
+        foreach (var known in _recent)
+            if (known is not null && known.S == s && known.U.AsSpan().SequenceEqual(u)) return known;
+        var snapshot = EvaluateNew(s, (double[])u.Clone());
+        Array.Copy(_recent, 0, _recent, 1, _recent.Length - 1);
+        _recent[0] = snapshot;
+        return snapshot;
+    }
+
+    private Snapshot EvaluateNew(double s, double[] u)
     {
         var liquid = new double[_n];
         for (int i = 0; i < _n; i++) liquid[i] = Math.Max(u[i], 0.0); // a trial stage may overshoot a tiny amount
@@ -233,7 +279,7 @@ internal sealed class RayleighStrip
         {
             // With two liquids the vapour is the three-phase one (heteroazeotrope while both layers last).
             var x = _equilibrium.Normalise(liquid, "liquid");
-            var (p, y, _, split) = _equilibrium.BubblePressureWithPhases(_setpoint, x);
+            var (p, y, _, split) = _equilibrium.BubblePressureWithPhases(_setpoint, x, phasesOnly: true);
             return new Snapshot(s, u, _setpoint, p, x, y) { Phases = split.Phases };
         }
 

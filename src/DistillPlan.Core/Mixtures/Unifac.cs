@@ -317,10 +317,13 @@ public sealed class Unifac : IActivityModel
             thetaPsiInto[m] = s;
         }
 
+        // Θ_m / Σ_n Θ_n ψ_nm once per group, not once per (k, m): the solvers' innermost loop.
+        Span<double> weight = stackalloc double[g];
+        for (int m = 0; m < g; m++) weight[m] = theta[m] / thetaPsiInto[m];
         for (int k = 0; k < g; k++)
         {
             double tail = 0;
-            for (int m = 0; m < g; m++) tail += theta[m] * psi[k * g + m] / thetaPsiInto[m];
+            for (int m = 0; m < g; m++) tail += psi[k * g + m] * weight[m];
             lnGamma[k] = _groupQ[k] * (1 - Math.Log(thetaPsiInto[k]) - tail);
         }
     }

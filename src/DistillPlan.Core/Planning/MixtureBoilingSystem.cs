@@ -31,6 +31,11 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
     /// <inheritdoc />
     public BubblePoint BubbleTemperature(double pressurePa, double[] liquid) => ToBubble(Equilibrium.BubbleTemperature(pressurePa, liquid));
 
+    /// <summary>Bubble pressure [Pa] of a liquid at T, honouring a split, without the point's
+    /// other parts (for drawing a curve: one liquid is settled by UNIFAC-LLE first where it can,
+    /// which gives the same pressure sooner).</summary>
+    public double BubblePressurePa(double temperatureK, double[] liquid) => Equilibrium.BubblePressurePa(temperatureK, liquid);
+
     private BubblePoint ToBubble(EquilibriumPoint p) =>
         new(p.TemperatureK, p.PressurePa, Components.Select(s => p.Vapor[s.Name]).ToArray(), p.ExtrapolatedComponents.Count > 0,
             p.LiquidPhases, p.LiquidPhaseBasis);
@@ -45,7 +50,14 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
     /// than 0.025 mole fraction to a pure component are left out: they change nothing a person
     /// can see, and original UNIFAC predicts some there that do not exist (acetone–water at 0.98 acetone).
     /// </summary>
-    public AzeotropeSurvey Azeotropes(double pressurePa)
+    public AzeotropeSurvey Azeotropes(double pressurePa) => _surveys.GetOrAdd(pressurePa, Survey);
+
+    // The plan surveys at its setpoint and its ramp checks its first step at the same pressure
+    // (and the text UI plans the ramp again): each survey is some hundred bubble points per pair.
+    // A survey depends only on the components, the model and the pressure, so it is kept.
+    private readonly System.Collections.Concurrent.ConcurrentDictionary<double, AzeotropeSurvey> _surveys = new();
+
+    private AzeotropeSurvey Survey(double pressurePa)
     {
         var found = new List<Azeotrope>();
         var problems = new List<string>();

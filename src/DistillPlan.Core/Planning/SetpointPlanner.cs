@@ -15,8 +15,13 @@ namespace DistillPlan.Core.Planning;
 public static partial class SetpointPlanner
 {
     /// <summary>Builds the plan for a charge from parsed settings.</summary>
-    public static Plan Plan(Charge charge, IBoilingSystem system, PlanSetup setup) =>
-        Plan(charge, system, setup.Equipment, setup.Rules, setup.Assumptions);
+    /// <param name="charge">What is evaporated.</param>
+    /// <param name="system">Its equilibrium model.</param>
+    /// <param name="setup">The parsed settings.</param>
+    /// <param name="rampReportEvery">Report interval of a mixture's ramp: the strip verb asks for its
+    /// own, so that <see cref="StripPlanner"/> can hand back this ramp instead of planning it again.</param>
+    public static Plan Plan(Charge charge, IBoilingSystem system, PlanSetup setup, double rampReportEvery = StripPlanner.RampReportEvery) =>
+        Plan(charge, system, setup.Equipment, setup.Rules, setup.Assumptions, rampReportEvery);
 
     /// <summary>Builds the plan for a charge.</summary>
     /// <param name="charge">What is evaporated.</param>
@@ -24,7 +29,9 @@ public static partial class SetpointPlanner
     /// <param name="equipment">The equipment.</param>
     /// <param name="rules">The ΔT rule and limits.</param>
     /// <param name="assumptions">The settings behind equipment and rules, as the settings table listed them.</param>
-    public static Plan Plan(Charge charge, IBoilingSystem system, Equipment equipment, Rules rules, IReadOnlyList<Assumption>? assumptions = null)
+    /// <param name="rampReportEvery">Report interval of a mixture's ramp.</param>
+    public static Plan Plan(Charge charge, IBoilingSystem system, Equipment equipment, Rules rules, IReadOnlyList<Assumption>? assumptions = null,
+        double rampReportEvery = StripPlanner.RampReportEvery)
     {
         double[] x = charge.MoleFractions();
         var atmosphericBoil = system.BubbleTemperature(equipment.Atmosphere.Pascal, x);
@@ -138,7 +145,7 @@ public static partial class SetpointPlanner
         // held at the setpoint pressure instead when the condensate decided it (StripPlanner).
         // The setpoints stand without it; a failure is said, not dropped.
         StripPlan ramp;
-        try { ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: 0.1); }
+        try { ramp = StripPlanner.Plan(plan, new StripRequest(null, StripEnd.Default), reportEvery: rampReportEvery); }
         catch (DistillPlanException e)
         {
             return plan with { Notes = [.. notes, Make("strip-not-computed", Severity.Caution, "", [], W("reason", e.Message))] };

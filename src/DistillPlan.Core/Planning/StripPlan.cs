@@ -51,6 +51,9 @@ public sealed record StripPlan
     /// <summary>Charge [mol] by name (the product included).</summary>
     public required IReadOnlyDictionary<string, double> ChargeMol { get; init; }
 
+    /// <summary>The evaporated fraction between reported steps it was planned with.</summary>
+    internal double ReportEvery { get; init; }
+
     /// <summary>The end in words.</summary>
     public string EndText(DisplayFormat format) => End.Message(format);
 }

@@ -27,8 +27,13 @@ public static class StripPlanner
     /// <param name="request">Fixed pressure or fixed vapour temperature, and the end.</param>
     /// <param name="model">The activity model asked for (null: the default).</param>
     /// <param name="reportEvery">Report a step each time this further fraction has evaporated.</param>
-    public static StripPlan Plan(Plan plan, StripRequest request, string? model = null, double reportEvery = 0.05)
+    public static StripPlan Plan(Plan plan, StripRequest request, string? model = null, double reportEvery = DefaultReportEvery)
     {
+        // The setpoint planner already planned a mixture's ramp with these very inputs: the text UI
+        // asks for it again after every edit, and it is the costliest part of a plan.
+        if (plan.Ramp is { } known && IsRampRequest(request) && known.ReportEvery == reportEvery
+            && BoilingSystems.ParseModel(model ?? ModelOf(plan)) == BoilingSystems.ParseModel(ModelOf(plan)))
+            return known with { Setpoints = plan };
         var charge = plan.Charge;
         var solvents = charge.Components.Select(c => c.Solvent).ToList();
         var components = solvents.Select(MixtureComponent.FromSolvent).ToList();
@@ -41,7 +46,10 @@ public static class StripPlanner
             components.Add(MixtureComponent.NonVolatile("product", product.MolarMassGPerMol));
             amounts.Add(product.Moles);
         }
-        var equilibrium = PhaseEquilibrium.Create(components, BoilingSystems.ParseModel(model ?? ModelOf(plan)));
+        var requested = BoilingSystems.ParseModel(model ?? ModelOf(plan));
+        var equilibrium = components.Count == 1
+            ? new PhaseEquilibrium(components, Mixtures.ActivityModelChoice.PureLiquid(requested))
+            : PhaseEquilibrium.Create(components, requested);
         bool volumes = solvents.All(s => s.MolarVolumeM3PerMol is not null);
         var peroxide = solvents.Where(s => s.PeroxideClass != PeroxideClass.None).Select(s => s.Name).ToList();
 
@@ -90,6 +98,16 @@ public static class StripPlanner
         }
         return Describe(plan, result, solvents, volumes, peroxide, hold, hottestBath, options);
     }
+
+    /// <summary>The report interval of a mixture plan's own ramp (the text UI's ramp pane).</summary>
+    public const double RampReportEvery = 0.1;
+
+    /// <summary>The report interval of <c>distillplan strip</c>.</summary>
+    public const double DefaultReportEvery = 0.05;
+
+    // What the setpoint planner asks for a mixture's ramp: held at the vapour temperature, default end.
+    private static bool IsRampRequest(StripRequest request)
+        => request.FixedPressure is null && request.End.Kind == StripEndKind.Default;
 
     private static string? ModelOf(Plan plan) => plan.System is MixtureBoilingSystem m ? Mixtures.ActivityModelChoice.NameOf(m.Equilibrium.Model.Requested) : null;
 
@@ -146,6 +164,7 @@ public static class StripPlanner
             Model = result.Model,
             ModelNote = result.FallbackReason ?? result.ModelNote,
             ChargeMol = result.ChargeMol,
+            ReportEvery = options.ReportEveryEvaporatedFraction,
         };
     }
 

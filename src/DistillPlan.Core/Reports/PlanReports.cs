@@ -165,7 +165,7 @@ public static class PlanReports
             double k = lo + (hi - lo) * i / 60;
             try
             {
-                pr.Add(Quantity.Pascal(p.System.BubblePressure(k, x).PressurePa));
+                pr.Add(Quantity.Pascal(p.System is MixtureBoilingSystem m ? m.BubblePressurePa(k, x) : p.System.BubblePressure(k, x).PressurePa));
                 t.Add(Quantity.Kelvin(k));
             }
             catch (DistillPlanException) { /* a point outside every curve's reach is simply not drawn */ }

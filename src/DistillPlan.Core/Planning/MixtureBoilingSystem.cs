@@ -73,7 +73,8 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
                     found.AddRange(result.Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025));
                     if (result.UsesPublishedValue && result.Note is string n) notes.Add($"{parts[i].Name}–{parts[j].Name}: {n}");
                 }
-                catch (DistillPlanException e) { problems.Add($"{parts[i].Name}–{parts[j].Name}: {e.Message}"); }
+                // A search whose solver gives up is reported as "not evaluated", never as an internal error.
+                catch (Exception e) when (e is DistillPlanException or MathNet.Numerics.NonConvergenceException) { problems.Add($"{parts[i].Name}–{parts[j].Name}: {e.Message}"); }
             }
         return new(found, problems.Count == 0 ? null : "the azeotrope search failed for " + string.Join("; ", problems), notes);
     }

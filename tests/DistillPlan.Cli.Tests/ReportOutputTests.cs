@@ -197,6 +197,15 @@ public sealed class ReportOutputTests : IDisposable
     }
 
     [Fact]
+    public void A_strip_step_does_not_repeat_what_the_plan_already_says()
+    {
+        // Ethylene glycol and hexane are two layers (the plan says so once); the ramp's first step is the setpoint itself.
+        var j = CliRunner.Json("setpoints", "ethylene-glycol=50,hexane=50");
+        Assert.Contains(j.GetProperty("checks").EnumerateArray(), c => c.GetProperty("code").GetString() == "two-liquids");
+        Assert.DoesNotContain(j.GetProperty("ramp")[0].GetProperty("checks").EnumerateArray(), c => c.GetProperty("code").GetString() == "two-liquids");
+    }
+
+    [Fact]
     public void A_plan_file_given_alone_opens_the_text_ui()
     {
         string file = Path.Combine(TestPaths.RepoRoot, "examples", "dmf-reaction-workup.yaml");

@@ -39,8 +39,11 @@ public sealed record Finding
     /// <summary>The severity as the lower-case word used in output.</summary>
     public string SeverityWord => Severity.ToString().ToLowerInvariant();
 
-    /// <summary>Same code, variant and subjects (every named value: solvents, pairs): what a strip step compares with the plan to show only what changed.</summary>
-    public string Identity => Code + "/" + Variant + "/" + string.Join("/", Values.Values.Where(v => v.Kind == QuantityKind.Text).Select(v => v.Text));
+    /// <summary>The value names that say what a finding is about (not why or how it is worded).</summary>
+    private static readonly string[] SubjectKeys = ["solvent", "solvents", "first", "second", "layer_a", "layer_b", "component"];
+
+    /// <summary>Same code, variant and subjects (solvents, pairs, layers): what a strip step compares with the plan to show only what changed.</summary>
+    public string Identity => Code + "/" + Variant + "/" + string.Join("/", SubjectKeys.Where(Values.ContainsKey).Select(k => Values[k].Text));
 
     /// <summary>The message in a display format (the one wording catalogue).</summary>
     public string Message(DisplayFormat format) => Wording.Message(this, format);

@@ -80,9 +80,9 @@ public static partial class Wording
         ["azeotrope/not-evaluated"] = new("Azeotrope check not evaluated: {reason}.",
             "Look up the pair in an azeotrope table before relying on a clean separation."),
 
-        ["two-liquids/water"] = new("Two liquid phases in the pot at {vapor}: a {layer_a} layer ({layer_a_fraction} mole fraction {layer_a}, {layer_a_share} of the liquid) and a water layer ({layer_b_fraction} water, {layer_b_share}){basis}. While both layers are there the vapour composition is fixed ({vapor_a} {layer_a}, {vapor_b} water) and water comes off with the {layer_a}.",
+        ["two-liquids/water"] = new("Two liquid phases in the pot at {vapor}: a layer of {layer_a} ({layer_a_fraction} mole fraction {layer_a}, {layer_a_share} of the liquid) and a layer of water ({layer_b_fraction} water, {layer_b_share}){basis}. While both layers are there the vapour composition is fixed ({vapor_a} {layer_a}, {vapor_b} water) and water comes off with the {layer_a}.",
             "Expect a wet distillate that separates into two layers; azeotropic drying works this way (common practice). A two-layer pot bumps easily: rotate well, lower the pressure in the approach steps, use a bump trap."),
-        ["two-liquids/"] = new("Two liquid phases in the pot at {vapor}: a {layer_a} layer ({layer_a_fraction} mole fraction {layer_a}, {layer_a_share} of the liquid) and a {layer_b} layer ({layer_b_fraction} {layer_b}, {layer_b_share}){basis}. While both layers are there the vapour composition is fixed ({vapor_a} {layer_a}, {vapor_b} {layer_b}) and both come off together.",
+        ["two-liquids/"] = new("Two liquid phases in the pot at {vapor}: a layer of {layer_a} ({layer_a_fraction} mole fraction {layer_a}, {layer_a_share} of the liquid) and a layer of {layer_b} ({layer_b_fraction} {layer_b}, {layer_b_share}){basis}. While both layers are there the vapour composition is fixed ({vapor_a} {layer_a}, {vapor_b} {layer_b}) and both come off together.",
             "Expect a distillate that separates into two layers. A two-layer pot bumps easily: rotate well, lower the pressure in the approach steps, use a bump trap."),
 
         ["pot-freezing/freezes"] = new("The pot boils at {vapor} at {pressure}, at or below the freezing limit of {solvent}, {melting_point}{estimate}: the pot freezes, stops evaporating and can crack the flask.",

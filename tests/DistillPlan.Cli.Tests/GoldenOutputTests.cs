@@ -30,15 +30,9 @@ public class GoldenOutputTests
         Assert.True(r.ExitCode == 0, r.Error);
         string actual = r.Output.Replace("\r\n", "\n");
         if (Environment.GetEnvironmentVariable("DISTILLPLAN_UPDATE_GOLDEN") == "1")
-            File.WriteAllText(Path.Combine(SourceDir(), "Golden", file), actual);
+            File.WriteAllText(Path.Combine(TestPaths.SourceDir, "Golden", file), actual);
         string expected = File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "Golden", file)).Replace("\r\n", "\n");
         Assert.Equal(expected, actual);
     }
 
-    internal static string SourceDir()
-    {
-        for (var d = new DirectoryInfo(AppContext.BaseDirectory); d is not null; d = d.Parent)
-            if (File.Exists(Path.Combine(d.FullName, "DistillPlan.Cli.Tests.csproj"))) return d.FullName;
-        throw new DirectoryNotFoundException("test project folder");
-    }
 }

@@ -18,14 +18,8 @@ public class HelpTextTests
         string expectedPath = Path.Combine(AppContext.BaseDirectory, "HelpText", verb + ".txt");
         string actual = r.Output.Replace("\r\n", "\n").Replace("testhost", "distillplan");
         if (Environment.GetEnvironmentVariable("DISTILLPLAN_UPDATE_HELP") == "1")
-            File.WriteAllText(Path.Combine(FindSourceDir(), "HelpText", verb + ".txt"), actual);
+            File.WriteAllText(Path.Combine(TestPaths.SourceDir, "HelpText", verb + ".txt"), actual);
         Assert.Equal(File.ReadAllText(expectedPath).Replace("\r\n", "\n"), actual);
     }
 
-    private static string FindSourceDir()
-    {
-        for (var d = new DirectoryInfo(AppContext.BaseDirectory); d is not null; d = d.Parent)
-            if (File.Exists(Path.Combine(d.FullName, "DistillPlan.Cli.Tests.csproj"))) return d.FullName;
-        throw new DirectoryNotFoundException("test project folder");
-    }
 }

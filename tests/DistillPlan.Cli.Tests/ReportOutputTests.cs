@@ -220,16 +220,3 @@ public sealed class ReportOutputTests : IDisposable
         Assert.Contains("neither a verb", missing.Error);
     }
 }
-
-internal static class TestPaths
-{
-    public static string RepoRoot
-    {
-        get
-        {
-            for (var d = new DirectoryInfo(AppContext.BaseDirectory); d is not null; d = d.Parent)
-                if (File.Exists(Path.Combine(d.FullName, "DistillPlan.sln"))) return d.FullName;
-            throw new DirectoryNotFoundException("repository root");
-        }
-    }
-}

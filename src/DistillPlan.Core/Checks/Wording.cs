@@ -135,10 +135,6 @@ public static partial class Wording
         ["atmospheric-boiling-point"] = "the charge boils at {allowed} at atmospheric pressure",
     };
 
-    /// <summary>Every variant key the catalogue knows ("code/variant"), for tests.</summary>
-    public static IEnumerable<string> Keys => Entries.Keys.Concat(
-        from low in ConflictNeeds.Keys from high in ConflictAllows.Keys select $"{ConflictCode(low, high)}/conflict:{low}:{high}");
-
     /// <summary>A conflict is reported under the code of the limit that won, or else of the bound it broke.</summary>
     internal static string ConflictCode(string low, string high) =>
         high is "bath-limit" or "product-limit" ? high : low == "coolant" ? "coolant-limit" : low;

@@ -2,7 +2,7 @@ using DistillPlan.Core.Quantities;
 
 namespace DistillPlan.Core.Planning.Settings;
 
-/// <summary>The state a plan's settings are read into, setting by setting, in table order.</summary>
+/// <summary>The state a plan's settings are read into, setting by setting, in table order; what a setting leaves alone keeps its default.</summary>
 internal sealed class PlanBuild
 {
     public HashSet<string> Given { get; } = [];
@@ -15,10 +15,4 @@ internal sealed class PlanBuild
     public double? ProductMolarMassGPerMol { get; set; }
     public Pressure? StripPressure { get; set; }
     public StripEnd StripEnd { get; set; } = StripEnd.Default;
-
-    public PlanBuild Copy()
-    {
-        var c = (PlanBuild)MemberwiseClone();
-        return c;
-    }
 }

@@ -45,8 +45,6 @@ public sealed class PlanSetting
 
     /// <summary>Reads the user's text into the build; throws <see cref="InputException"/> naming <c>--KEY</c>.</summary>
     internal Action<PlanBuild, string> Apply { get; init; } = (_, _) => { };
-    /// <summary>Sets the default (which may depend on settings applied before it).</summary>
-    internal Action<PlanBuild> ApplyDefault { get; init; } = _ => { };
     /// <summary>The value the plan used, for the assumptions list; null when the setting is not listed there.</summary>
     internal Func<PlanBuild, Quantity?> Value { get; init; } = _ => null;
     /// <summary>Where the default comes from, for the value the build holds (common practice, a standard …).</summary>

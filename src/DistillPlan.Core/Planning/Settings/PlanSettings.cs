@@ -203,16 +203,7 @@ public static class PlanSettings
     /// <summary>Reads the settings the user gave into a plan setup, defaults for the rest.</summary>
     public static PlanSetup Build(PlanInputs inputs)
     {
-        var b = new PlanBuild();
-        foreach (var s in All)
-        {
-            if (inputs.Get(s.Key) is string text)
-            {
-                b.Given.Add(s.Key);
-                s.Apply(b, text);
-            }
-            else s.ApplyDefault(b);
-        }
+        var b = Read(inputs, stopBefore: null, lenient: false);
         Product? product = (b.ProductMassG, b.ProductMolarMassGPerMol) switch
         {
             (double m, double mm) => new Product(m, mm, null),
@@ -232,19 +223,24 @@ public static class PlanSettings
     /// </summary>
     public static string DefaultHint(PlanSetting setting, PlanInputs inputs, DisplayFormat format)
     {
+        // The settings read before this one decide its default (a pump kind its ultimate pressure).
+        var b = Read(inputs, stopBefore: setting, lenient: true);
+        return setting.Value(b) is Quantity q ? $"default {format.Format(q)}" : setting.Hint ?? "";
+    }
+
+    /// <summary>Reads the given settings in table order, up to <paramref name="stopBefore"/>; a lenient read skips bad values.</summary>
+    private static PlanBuild Read(PlanInputs inputs, PlanSetting? stopBefore, bool lenient)
+    {
         var b = new PlanBuild();
         foreach (var s in All)
         {
-            if (s == setting) break;
-            if (inputs.Get(s.Key) is string text)
-            {
-                b.Given.Add(s.Key);
-                try { s.Apply(b, text); } catch (DistillPlanException) { }
-            }
-            else s.ApplyDefault(b);
+            if (s == stopBefore) break;
+            if (inputs.Get(s.Key) is not string text) continue;
+            b.Given.Add(s.Key);
+            try { s.Apply(b, text); }
+            catch (DistillPlanException) when (lenient) { }
         }
-        setting.ApplyDefault(b);
-        return setting.Value(b) is Quantity q ? $"default {format.Format(q)}" : setting.Hint ?? "";
+        return b;
     }
 
     internal static Basis ParseBasis(string text, string field) => text.Trim().ToLowerInvariant() switch

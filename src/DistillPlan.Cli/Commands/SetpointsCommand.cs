@@ -9,7 +9,7 @@ internal static class SetpointsCommand
 {
     public static Command Build()
     {
-        var verb = new PlanVerb(SettingGroup.Charge, SettingGroup.Equipment, SettingGroup.Rules);
+        var verb = new PlanVerb(SettingGroup.Charge, SettingGroup.Equipment, SettingGroup.Size, SettingGroup.Rules);
         var cmd = new Command("setpoints", "Bath temperature, vacuum setpoint and condenser limit for a charge, with the checks.");
         verb.AddTo(cmd);
         cmd.SetAction(r =>

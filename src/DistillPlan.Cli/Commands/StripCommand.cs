@@ -13,7 +13,7 @@ internal static class StripCommand
 {
     public static Command Build()
     {
-        var verb = new PlanVerb(SettingGroup.Charge, SettingGroup.Equipment, SettingGroup.Rules, SettingGroup.Strip);
+        var verb = new PlanVerb(SettingGroup.Charge, SettingGroup.Equipment, SettingGroup.Size, SettingGroup.Rules, SettingGroup.Strip);
         var cmd = new Command("strip", "Batch evaporation step by step: pressure ramp (or temperature rise), compositions, distillate and residue, checks.");
         verb.AddTo(cmd);
         cmd.SetAction(r =>

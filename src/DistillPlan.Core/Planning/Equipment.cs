@@ -15,6 +15,15 @@ public enum PumpKind
     LiquidRing,
 }
 
+/// <summary>What the charge is evaporated in: glassware at the bench, or a plant vessel.</summary>
+public enum ApparatusKind
+{
+    /// <summary>A rotary evaporator: a round glass flask turning in a bath, a glass coil condenser.</summary>
+    RotaryEvaporator,
+    /// <summary>A jacketed vessel (reactor or still) with a jacket, a stirrer and a plant condenser.</summary>
+    JacketedVessel,
+}
+
 /// <summary>Kinds of heating medium, each with its usual upper limit.</summary>
 public enum HeatingMedium
 {
@@ -46,6 +55,31 @@ public sealed record Equipment
     public Pressure Atmosphere { get; init; } = Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);
     /// <summary>Gas temperature at the pump exhaust, for the flash-point check (warmer than the room).</summary>
     public Temperature Ambient { get; init; } = Temperature.FromCelsius(40);
+
+    /// <summary>Rotary evaporator (the default) or jacketed vessel.</summary>
+    public ApparatusKind Apparatus { get; init; } = ApparatusKind.RotaryEvaporator;
+    /// <summary>Flask size or vessel working volume [m³]; null: a flask is chosen from the charge.</summary>
+    public double? NominalVolumeM3 { get; init; }
+    /// <summary>Heat-transfer area given by the user [m²], instead of the one from the geometry (the wetted area at the fill).</summary>
+    public double? HeatTransferAreaM2 { get; init; }
+    /// <summary>Overall heat-transfer coefficient, bath or jacket to boiling liquid [W/(m²·K)]; null: a rule-of-thumb default.</summary>
+    public double? HeatTransferWPerM2K { get; init; }
+    /// <summary>Rated condenser capacity [W]; null: from the condenser area.</summary>
+    public double? CondenserCapacityW { get; init; }
+    /// <summary>Condenser area [m²]; null: a rule-of-thumb default for the apparatus.</summary>
+    public double? CondenserAreaM2 { get; init; }
+    /// <summary>Pumping speed [m³/s]; null: a rule-of-thumb default for the pump kind and apparatus.</summary>
+    public double? PumpSpeedM3PerS { get; init; }
+    /// <summary>Air leaking into the vacuum [kg/s]; null: a rule-of-thumb default for the apparatus.</summary>
+    public double? LeakAirKgPerS { get; init; }
+    /// <summary>Temperature of the charge before heating; null: 20 °C.</summary>
+    public Temperature? StartTemperature { get; init; }
+    /// <summary>Lowest volume that keeps a vessel stirred and its heated wall wetted [m³]; null: a rule-of-thumb share of the working volume.</summary>
+    public double? MinimumVolumeM3 { get; init; }
+    /// <summary>Highest fill [m³] (a swap's refill); null: the working volume (vessel) or half the flask.</summary>
+    public double? MaximumVolumeM3 { get; init; }
+    /// <summary>True for a jacketed vessel.</summary>
+    public bool IsVessel => Apparatus == ApparatusKind.JacketedVessel;
 
     /// <summary>A pump kind in words ("diaphragm pump").</summary>
     public static string Word(PumpKind kind) => kind switch

@@ -17,7 +17,7 @@ internal sealed class EquipmentPane : View
 
     /// <summary>The settings this pane shows: equipment, rules (the product limit is on the charge pane) and the strip.</summary>
     public static IEnumerable<PlanSetting> Shown => PlanSettings.All.Where(s =>
-        s.Group is SettingGroup.Equipment or SettingGroup.Strip || (s.Group == SettingGroup.Rules && s.Key != "product-max"));
+        s.Group is SettingGroup.Equipment or SettingGroup.Size or SettingGroup.Strip || (s.Group == SettingGroup.Rules && s.Key != "product-max"));
 
     public EquipmentPane(PlannerViewModel vm)
     {

@@ -15,4 +15,10 @@ internal sealed class PlanBuild
     public double? ProductMolarMassGPerMol { get; set; }
     public Pressure? StripPressure { get; set; }
     public StripEnd StripEnd { get; set; } = StripEnd.Default;
+    /// <summary>The named unit of the user's equipment file the settings came from, if any.</summary>
+    public string? UnitName { get; set; }
+    /// <summary>Where that unit is written (file:line).</summary>
+    public string? UnitFile { get; set; }
+    /// <summary>Keys whose value came from that unit (not typed by the user).</summary>
+    public HashSet<string> FromUnit { get; } = [];
 }

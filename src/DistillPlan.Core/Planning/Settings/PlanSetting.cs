@@ -11,6 +11,8 @@ public enum SettingGroup
     Equipment,
     /// <summary>The ΔT rule and the limits a plan follows.</summary>
     Rules,
+    /// <summary>The size of the equipment: flask or vessel, areas, condenser, pump speed, leak (heat, time and capacity).</summary>
+    Size,
     /// <summary>How a strip is held and where it ends.</summary>
     Strip,
 }

@@ -1,6 +1,7 @@
 using System.Globalization;
 using DistillPlan.Core.Quantities;
 using DistillPlan.Core.Reports;
+using DistillPlan.Core.Scale;
 
 namespace DistillPlan.Core.Planning.Settings;
 
@@ -42,6 +43,19 @@ public static class PlanSettings
             FileSection = "product", FileKeyOverride = "molar-mass",
             Help = "Molar mass of the product in g/mol (with --product-mass).",
             Apply = (b, v) => b.ProductMolarMassGPerMol = ReadPositive(v.Replace("g/mol", "").Trim(), "--product-molar-mass", "a molar mass in g/mol above zero, e.g. 320", 1e6),
+        },
+        new()
+        {
+            Key = "equipment", Hint = "a unit of your equipment file", Label = "equipment unit", Caption = "Unit:", Group = SettingGroup.Equipment,
+            Help = "A named unit of your equipment file (rotavap-2, R-101) that fills in its equipment settings; options given beside it override them.",
+            // Read before the loop (see Read): the unit's values stand in for settings the user did not give.
+            Value = b => b.UnitName is string n ? Quantity.Words(n) : null,
+            GivenBasis = b => "equipment file " + (b.UnitFile ?? ""),
+        },
+        new()
+        {
+            Key = "equipment-file", Hint = "default: your config folder", Label = "equipment file", Caption = "Unit file:", Group = SettingGroup.Equipment,
+            Help = "The equipment file to take --equipment from (default: equipment.yaml in your config folder, ~/.config/distillplan/).",
         },
         new()
         {
@@ -155,6 +169,95 @@ public static class PlanSettings
         },
         new()
         {
+            Key = "flask", Hint = "rotary evaporator flask; 250mL, 1L", Label = "evaporator flask", Caption = "Flask size:", Group = SettingGroup.Size,
+            Help = "Rotary evaporator flask size (250mL, 1L, 20L); the charge sets the fill. Default: the smallest usual flask the charge fills at most half.",
+            Apply = (b, v) =>
+            {
+                if (b.Given.Contains("vessel")) throw new InputException("--flask", v, "either --flask or --vessel, not both");
+                b.Equipment = b.Equipment with { Apparatus = ApparatusKind.RotaryEvaporator, NominalVolumeM3 = ScaleUnits.VolumeM3(v, "--flask", 0.1) };
+            },
+            Value = b => b.Equipment.IsVessel || b.Equipment.NominalVolumeM3 is not double f ? null : Quantity.Number(f * 1e3, "L"),
+        },
+        new()
+        {
+            Key = "vessel", Hint = "jacketed vessel working volume; 250L", Label = "jacketed vessel, working volume", Caption = "Vessel size:", Group = SettingGroup.Size,
+            Help = "Jacketed vessel by working volume (250L, 1.6m3): a stirred vessel with a jacket; sets the jacket as heating medium.",
+            Apply = (b, v) =>
+            {
+                double m3 = ScaleUnits.VolumeM3(v, "--vessel", 100);
+                // A vessel is heated through its jacket unless the user said otherwise (the heating setting is read before).
+                var heating = b.Given.Contains("heating") ? b.Equipment.Heating : HeatingMedium.Jacket;
+                var max = b.Given.Contains("heating") || b.Given.Contains("bath-max") ? b.Equipment.HeatingMax : Equipment.TypicalLimit(heating);
+                b.Equipment = b.Equipment with { Apparatus = ApparatusKind.JacketedVessel, NominalVolumeM3 = m3, Heating = heating, HeatingMax = max };
+            },
+            Value = b => b.Equipment.IsVessel && b.Equipment.NominalVolumeM3 is double m3 ? Quantity.Number(m3 * 1e3, "L") : null,
+        },
+        new()
+        {
+            Key = "area", Hint = "m2; default: wetted area at the fill", Label = "heat-transfer area", Caption = "Heated area:", Group = SettingGroup.Size,
+            Help = "Heat-transfer area in m2 (0.05m2, 1.2m2), instead of the wetted area worked out from the flask or vessel geometry at each level.",
+            Apply = (b, v) => b.Equipment = b.Equipment with { HeatTransferAreaM2 = ScaleUnits.AreaM2(v, "--area") },
+            Value = b => b.Equipment.HeatTransferAreaM2 is double a ? Quantity.Number(a, "m²") : null,
+        },
+        new()
+        {
+            Key = "heat-transfer", Hint = "W/(m2 K); default by apparatus", Label = "overall heat-transfer coefficient U", Caption = "U (W/m2K):", Group = SettingGroup.Size,
+            Help = "Overall heat-transfer coefficient U from bath or jacket to the boiling liquid, W/(m2 K) (default 450 for a rotating flask, 300 for a jacketed vessel; rules of thumb).",
+            Apply = (b, v) => b.Equipment = b.Equipment with { HeatTransferWPerM2K = ScaleUnits.HeatTransferWPerM2K(v, "--heat-transfer") },
+            Value = b => b.Equipment.HeatTransferWPerM2K is double u ? Quantity.Number(u, "W/(m² K)") : null,
+        },
+        new()
+        {
+            Key = "condenser-capacity", Hint = "rated W or kW; or give its area", Label = "condenser capacity (rated)", Caption = "Cond. rating:", Group = SettingGroup.Size,
+            Help = "The condenser's rated capacity (400W, 12kW), instead of one worked out from its area.",
+            Apply = (b, v) => b.Equipment = b.Equipment with { CondenserCapacityW = ScaleUnits.PowerW(v, "--condenser-capacity") },
+            Value = b => b.Equipment.CondenserCapacityW is double w ? Quantity.Number(w, "W") : null,
+        },
+        new()
+        {
+            Key = "condenser-area", Hint = "m2; default by apparatus", Label = "condenser area", Caption = "Cond. area:", Group = SettingGroup.Size,
+            Help = "Condenser cooling area in m2 (default 0.2 m2 for a laboratory coil; a rule of thumb for a vessel); its capacity is U·A·ΔT to the coolant.",
+            Apply = (b, v) => b.Equipment = b.Equipment with { CondenserAreaM2 = ScaleUnits.AreaM2(v, "--condenser-area") },
+            Value = b => b.Equipment.CondenserAreaM2 is double a ? Quantity.Number(a, "m²") : null,
+        },
+        new()
+        {
+            Key = "pump-speed", Hint = "m3/h; default by pump kind", Label = "pumping speed", Caption = "Pump speed:", Group = SettingGroup.Size,
+            Help = "The pump's pumping speed (2m3/h, 30L/min; bare number: m3/h).",
+            Apply = (b, v) => b.Equipment = b.Equipment with { PumpSpeedM3PerS = ScaleUnits.VolumeFlowM3PerS(v, "--pump-speed") },
+            Value = b => b.Equipment.PumpSpeedM3PerS is double s ? Quantity.Number(s * 3600, "m³/h") : null,
+        },
+        new()
+        {
+            Key = "leak-rate", Hint = "kg/h, g/h or mbar.L/s", Label = "air leak into the vacuum", Caption = "Leak rate:", Group = SettingGroup.Size,
+            Help = "Air leaking into the vacuum: 1kg/h, 5g/h or 0.5mbar.L/s (bare number: kg/h). Default: a rule of thumb for tight glassware or a plant vessel.",
+            Apply = (b, v) => b.Equipment = b.Equipment with { LeakAirKgPerS = ScaleUnits.LeakKgPerS(v, "--leak-rate") },
+            Value = b => b.Equipment.LeakAirKgPerS is double k ? Quantity.Number(k * 3.6e6, "g/h") : null,
+        },
+        new()
+        {
+            Key = "start-temp", Label = "charge temperature at the start", Caption = "Start temp:", Group = SettingGroup.Size,
+            Help = "Temperature of the charge before heating, for the heat-up time (default 20 °C).",
+            Apply = (b, v) => b.Equipment = b.Equipment with { StartTemperature = ReadTemperature(v, "--start-temp", -50, 200) },
+            Value = b => Quantity.Of(b.Equipment.StartTemperature ?? Temperature.FromCelsius(20)),
+            DefaultBasis = _ => "room temperature, " + CommonPractice,
+        },
+        new()
+        {
+            Key = "min-volume", Hint = "vessel: lowest stirred volume", Label = "minimum (stirred) volume", Caption = "Min volume:", Group = SettingGroup.Size,
+            Help = "Lowest volume that keeps the vessel stirred and its jacket wetted (50L; bare number: L). Default: a quarter of a vessel's working volume (rule of thumb).",
+            Apply = (b, v) => b.Equipment = b.Equipment with { MinimumVolumeM3 = ScaleUnits.VolumeM3(v, "--min-volume", 100) },
+            Value = b => b.Equipment.MinimumVolumeM3 is double m ? Quantity.Number(m * 1e3, "L") : null,
+        },
+        new()
+        {
+            Key = "max-volume", Hint = "highest fill; default working volume", Label = "maximum fill", Caption = "Max volume:", Group = SettingGroup.Size,
+            Help = "Highest fill (a swap refills to it; 200L; bare number: L). Default: a vessel's working volume, or half the flask.",
+            Apply = (b, v) => b.Equipment = b.Equipment with { MaximumVolumeM3 = ScaleUnits.VolumeM3(v, "--max-volume", 100) },
+            Value = b => b.Equipment.MaximumVolumeM3 is double m ? Quantity.Number(m * 1e3, "L") : null,
+        },
+        new()
+        {
             Key = "vapor-temp", Label = "preferred vapour temperature", Caption = "Vapour pref.:", Group = SettingGroup.Rules,
             Help = "Preferred vapour temperature (default 40 °C; 40, 40C, 313K, 104F).",
             Apply = (b, v) => b.Rules = b.Rules with { PreferredVapor = ReadTemperature(v, "--vapor-temp", -80, 300) },
@@ -212,9 +315,29 @@ public static class PlanSettings
             _ => throw new InputException("--product-molar-mass", "", "a molar mass in g/mol such as 320 when a product mass is given"),
         };
         var assumptions = All.Select(s => (s, v: s.Value(b))).Where(t => t.v is not null)
-            .Select(t => new Assumption(t.s.Key, t.s.Label, t.v!.Value, !t.s.IsGiven(b), t.s.IsGiven(b) ? t.s.GivenBasis?.Invoke(b) ?? "given" : t.s.DefaultBasis(b)))
+            .Select(t => new Assumption(t.s.Key, t.s.Label, t.v!.Value, !t.s.IsGiven(b), BasisOf(t.s, b)))
             .ToList();
         return new PlanSetup(b.Equipment, b.Rules, b.Basis, b.Model, product, new StripRequest(b.StripPressure, b.StripEnd), assumptions);
+    }
+
+    private static string BasisOf(PlanSetting s, PlanBuild b) =>
+        !s.IsGiven(b) ? s.DefaultBasis(b)
+        : b.FromUnit.Contains(s.Key) ? $"equipment unit {b.UnitName}"
+        : s.GivenBasis?.Invoke(b) ?? "given";
+
+    /// <summary>A vessel's volumes must nest: minimum below maximum, both within the working volume.</summary>
+    private static void CheckVolumes(Equipment e)
+    {
+        string L(double m3) => (m3 * 1e3).ToString("0.###", CultureInfo.InvariantCulture) + " L";
+        if (e.MinimumVolumeM3 is double min && e.MaximumVolumeM3 is double max && min >= max)
+            throw new InputException("--min-volume", L(min), $"a minimum volume below the maximum fill ({L(max)})");
+        if (e.NominalVolumeM3 is double v)
+        {
+            if (e.MinimumVolumeM3 is double m && m >= v)
+                throw new InputException("--min-volume", L(m), $"a minimum volume below the {(e.IsVessel ? "vessel's working volume" : "flask size")} ({L(v)})");
+            if (e.MaximumVolumeM3 is double x && x > v)
+                throw new InputException("--max-volume", L(x), $"a fill at most the {(e.IsVessel ? "vessel's working volume" : "flask size")} ({L(v)})");
+        }
     }
 
     /// <summary>
@@ -232,14 +355,33 @@ public static class PlanSettings
     private static PlanBuild Read(PlanInputs inputs, PlanSetting? stopBefore, bool lenient)
     {
         var b = new PlanBuild();
+        // A named unit's settings stand in for those the user did not give.
+        EquipmentUnit? unit = null;
+        if (inputs.Get("equipment") is string name)
+        {
+            try { unit = EquipmentFile.Find(name, inputs.Get("equipment-file")); }
+            catch (DistillPlanException) when (lenient) { }
+            if (unit is not null) (b.UnitName, b.UnitFile) = (unit.Name, unit.Origin);
+        }
         foreach (var s in All)
         {
             if (s == stopBefore) break;
-            if (inputs.Get(s.Key) is not string text) continue;
+            string? text = inputs.Get(s.Key);
+            if (text is null && unit is not null && unit.Settings.TryGetValue(s.Key, out var fromUnit))
+            {
+                text = fromUnit;
+                b.FromUnit.Add(s.Key);
+            }
+            if (text is null) continue;
             b.Given.Add(s.Key);
             try { s.Apply(b, text); }
+            catch (InputException e) when (b.FromUnit.Contains(s.Key) && !lenient)
+            {
+                throw new InputException(e.Field, e.Value, e.Allowed, $"{unit!.Origin}: {s.Key}: {e.Message}");
+            }
             catch (DistillPlanException) when (lenient) { }
         }
+        if (!lenient) CheckVolumes(b.Equipment);
         return b;
     }
 

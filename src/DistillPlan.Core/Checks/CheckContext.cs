@@ -25,12 +25,14 @@ namespace DistillPlan.Core.Checks;
 /// <param name="AzeotropeProblem">Why the azeotrope search failed, when it did (the check is then "not evaluated").</param>
 /// <param name="LiquidPhases">The pot's liquid phases at this state (two when it has split into layers), or null when not known.</param>
 /// <param name="LiquidPhaseBasis">What decided the number of liquids, or null.</param>
+/// <param name="Heat">The heat and gas balance at this state, when the charge's size is known (condenser and pump capacity, solvent to the pump).</param>
 public sealed record CheckContext(
     IBoilingSystem System, double[] Liquid, Equipment Equipment, Rules Rules,
     Temperature Vapor, Temperature Bath, Pressure Pressure, Temperature CondenserMax,
     double[] VaporComposition, bool Extrapolated, Temperature? ProductMax,
     IReadOnlyList<Conflict> Conflicts, IReadOnlyList<Mixtures.Azeotrope> Azeotropes, string? AzeotropeProblem = null,
-    IReadOnlyList<Mixtures.LiquidPhase>? LiquidPhases = null, string? LiquidPhaseBasis = null)
+    IReadOnlyList<Mixtures.LiquidPhase>? LiquidPhases = null, string? LiquidPhaseBasis = null,
+    Scale.HeatState? Heat = null)
 {
     /// <summary>The solvents of the pot in composition order.</summary>
     public IReadOnlyList<Solvent> Components => System.Components;

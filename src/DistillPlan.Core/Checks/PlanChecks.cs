@@ -43,6 +43,8 @@ public static class PlanChecks
         Add(found, TwoLiquids(c));
         Add(found, PotFreezing(present, c));
         Add(found, Breakthrough(c));
+        Add(found, CondenserCapacity(c));
+        Add(found, PumpCapacity(c));
         Add(found, PumpLimit(c));
         foreach (var conflict in c.Conflicts) found.Add(ConflictFinding(conflict));
         Add(found, HeldAtLimit(c, "bath-limit", c.Equipment.HeatingMax, Heating));
@@ -152,10 +154,49 @@ public static class PlanChecks
 
         double mVapor = c.Components.Zip(c.VaporComposition).Sum(t => t.First.MolarMassGPerMol * t.Second);
         double perAir = mVapor / PhysicalConstants.AirMolarMassGPerMol * pCond / (p - pCond);
+        if (c.Heat is Scale.HeatState heat && heat.LossShare is double share)
+        {
+            // With the charge's size known the loss is a rate and a share of what evaporates.
+            if (share < LossShareWorthSaying) return null;
+            values.Add(N("loss_rate", heat.SolventToPumpGPerH, "g/h"));
+            values.Add(("loss_share", Reports.Quantity.Percent(share)));
+            return Make("solvent-loss", share >= 0.05 ? Severity.Warning : Severity.Caution, "share", Coolant, [.. values]);
+        }
         if (perAir < LossWorthSaying) return null;
-        values.Add(N("solvent_per_air", perAir, "g"));
-        return Make("solvent-loss", perAir >= 1 ? Severity.Warning : Severity.Caution, "", Coolant, [.. values]);
+        double leakKgPerS = Scale.ScaleSetup.LeakKgPerS(c.Equipment, c.Equipment.NominalVolumeM3 ?? 0);
+        values.Add(N("loss_rate", perAir * leakKgPerS * 3.6e6, "g/h"));
+        values.Add(N("leak", leakKgPerS * 3.6e6, "g/h"));
+        return Make("solvent-loss", perAir >= 1 ? Severity.Warning : Severity.Caution, "", [.. Coolant, "leak-rate"], [.. values]);
     }
+
+    /// <summary>
+    /// condenser-capacity: the heat going in must come out at the condenser; vapour it cannot
+    /// take goes to the pump (docs/methods.md, Heat and time).
+    /// </summary>
+    public static Finding? CondenserCapacity(CheckContext c)
+    {
+        if (c.Heat is not Scale.HeatState h || h.Breakthrough || h.HeatDutyW <= h.CondenserCapacityW * (1 + 1e-9)) return null;
+        // The bath that would fit: the same U·A at 90 % of the capacity.
+        double fitsK = c.Vapor.Kelvin + Scale.ScalePlanner.CondenserLoadTarget * h.CondenserCapacityW / Math.Max(h.HeatDutyW, 1e-9) * (c.Bath.Kelvin - c.Vapor.Kelvin);
+        return Make("condenser-capacity", Severity.Warning, "over", ["condenser-area", "condenser-capacity", "coolant-temp", "bath-max"],
+            N("duty", h.HeatDutyW, "W"), N("capacity", h.CondenserCapacityW, "W"), T("bath", c.Bath), TK("bath_fits", fitsK));
+    }
+
+    /// <summary>pump-capacity: the gas to be pumped at the pressure (leak air and solvent vapour) against the pumping speed.</summary>
+    public static Finding? PumpCapacity(CheckContext c)
+    {
+        if (c.Heat is not Scale.HeatState h || h.PumpShare <= PumpShareWorthSaying) return null;
+        return Make("pump-capacity", h.PumpShare > 1 ? Severity.Warning : Severity.Caution, h.PumpShare > 1 ? "over" : "near",
+            ["pump-speed", "leak-rate", "coolant-temp"],
+            N("gas_load", h.GasLoadM3PerS * 3600, "m³/h"), N("speed", h.PumpSpeedM3PerS * 3600, "m³/h"), P("pressure", c.Pressure),
+            ("share", Reports.Quantity.Percent(h.PumpShare)));
+    }
+
+    /// <summary>Below this share of the evaporation, solvent to the pump is not worth a line.</summary>
+    private const double LossShareWorthSaying = 0.005;
+
+    /// <summary>Above this share of the pumping speed the gas load is worth a line (the pump has little left for a surge).</summary>
+    private const double PumpShareWorthSaying = 0.8;
 
     /// <summary>pump-limit: the pressure is below what the pump can hold (twice its ultimate, common practice).</summary>
     public static Finding? PumpLimit(CheckContext c)

@@ -61,6 +61,8 @@ public sealed record Plan
     public required Equipment Equipment { get; init; }
     /// <summary>The rules applied.</summary>
     public required Rules Rules { get; init; }
+    /// <summary>Heat duty, rates, capacities and time, when the charge's size is known.</summary>
+    public Scale.PlanScale? Scale { get; init; }
     /// <summary>The product's maximum temperature in force (the lower of the rule's and the product's own).</summary>
     public Temperature? ProductMax { get; init; }
 }

@@ -1,6 +1,7 @@
 using DistillPlan.Core.Checks;
 using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Core.Quantities;
+using DistillPlan.Core.Scale;
 using static DistillPlan.Core.Checks.F;
 
 namespace DistillPlan.Core.Planning;
@@ -93,18 +94,43 @@ public static partial class SetpointPlanner
         // temperature at the setpoint, with the capture margin (docs/methods.md, Condenser capture).
         if (mixture is not null) condenserMax = Temperature.Min(condenserMax, CondensateCapture.CondenserLimit(system, setpoint, bubble.Vapor) ?? condenserMax);
 
+        var notes0 = new List<Finding>();
+        // The size side (docs/methods.md, Heat and time): the condenser may hold the bath below the ΔT rule's.
+        var sizing = ScaleSetup.Resolve(charge, equipment, out string? sizeUnknown);
+        HeatState? heat = null;
+        var scaleNotes = new List<Finding>();
+        if (sizing is not null)
+        {
+            var ruleBath = bath;
+            bath = ScalePlanner.CondenserLimitedBath(sizing, system, bubble.Vapor, vapor, bath, setpoint, equipment.Coolant, out var state);
+            heat = state;
+            if (bath < ruleBath)
+            {
+                var full = HeatBalance.At(sizing, system, bubble.Vapor, sizing.ChargeM3, vapor, ruleBath, setpoint, equipment.Coolant);
+                bool tooSmall = state.HeatDutyW > state.CondenserCapacityW;
+                scaleNotes.Add(tooSmall
+                    ? Make("condenser-capacity", Severity.Warning, "too-small", ["condenser-area", "condenser-capacity", "coolant-temp"],
+                        N("capacity", state.CondenserCapacityW, "W"), DT("step", bath.Kelvin - vapor.Kelvin), N("duty", state.HeatDutyW, "W"))
+                    : Make("condenser-capacity", Severity.Caution, "bath-lowered", ["condenser-area", "condenser-capacity", "coolant-temp", "delta-t"],
+                        N("capacity", state.CondenserCapacityW, "W"), T("rule_bath", ruleBath), N("rule_duty", full.HeatDutyW, "W"),
+                        T("bath", bath), N("duty", state.HeatDutyW, "W")));
+            }
+            scaleNotes.AddRange(FillLevel(sizing, equipment));
+        }
+        else if (sizeUnknown is not null)
+            notes0.Add(Make("scale", Severity.Info, "not-computed", ["flask", "vessel"], W("reason", sizeUnknown)));
+
         var survey = mixture?.Azeotropes(setpoint.Pascal) ?? AzeotropeSurvey.None;
         var context = new CheckContext(system, x, equipment, rules, vapor, bath, setpoint, condenserMax, bubble.Vapor,
             bubble.Extrapolated || atmosphericBoil.Extrapolated, productMax, conflicts, survey.Found, survey.Problem,
-            bubble.LiquidPhases, bubble.LiquidPhaseBasis);
-        var checks = PlanChecks.Evaluate(context).ToList();
+            bubble.LiquidPhases, bubble.LiquidPhaseBasis, heat);
+        var checks = PlanChecks.Evaluate(context).Where(f => !(f.Code == "condenser-capacity" && scaleNotes.Any(n => n.Code == f.Code))).ToList();
+        checks.AddRange(scaleNotes);
         if (capture is { Captured: false })
-        {
             checks.Add(CondensateCapture.ColderCoolantFinding(system, equipment.Coolant, setpoint, vapor, bubble.Vapor));
-            checks = [.. checks.OrderByDescending(f => f.Severity)];
-        }
+        checks = [.. checks.OrderByDescending(f => f.Severity)];
 
-        var notes = new List<Finding>();
+        var notes = notes0;
         if (system.ModelNote is string note) notes.Add(Make("model", Severity.Info, "", ["model"], W("note", note)));
         if (mixture?.ApproximationNote is string approximate) notes.Add(Make("model", Severity.Info, "approximate", ["model"], W("note", approximate)));
         foreach (var published in survey.PublishedNotes) notes.Add(Make("published-azeotrope", Severity.Info, "", ["model"], W("note", published)));
@@ -133,13 +159,15 @@ public static partial class SetpointPlanner
             StartLiquidPhases = bubble.LiquidPhases ?? [],
             StartLiquidPhaseBasis = bubble.LiquidPhaseBasis,
             Checks = checks,
-            Assumptions = [.. assumptions ?? [], .. FixedRules(rules)],
+            Assumptions = [.. assumptions ?? [], .. sizing?.Assumptions ?? [], .. FixedRules(rules)],
             Notes = notes,
             Equipment = equipment,
             Rules = rules,
             ProductMax = productMax,
         };
-        if (mixture is null || atmospheric) return plan;
+        if (sizing is not null)
+            plan = plan with { Scale = new PlanScale { Setup = sizing, Start = heat!, HeatUp = HeatUp.Estimate(sizing, charge, vapor, bath), LoweredBathStep = bath < vapor + rules.BathToVapor ? bath - vapor : null } };
+        if (mixture is null || atmospheric) return WithPureTime(plan);
 
         // A mixture's pressure ramp at the plan's vapour temperature, with the strip's own ends;
         // held at the setpoint pressure instead when the condensate decided it (StripPlanner).
@@ -151,7 +179,35 @@ public static partial class SetpointPlanner
             return plan with { Notes = [.. notes, Make("strip-not-computed", Severity.Caution, "", [], W("reason", e.Message))] };
         }
         if (ramp.Steps.Count > 1) notes.Add(RampNote(ramp));
-        return plan with { Ramp = ramp, Notes = notes };
+        plan = plan with { Ramp = ramp, Notes = notes };
+        if (plan.Scale is PlanScale scale && ramp.Steps.Count > 0 && ramp.Steps[^1].TimeS is double end)
+            plan = plan with { Scale = scale with { EvaporationTimeS = end - scale.HeatUp.TimeS, EndText = ramp.EndText(Reports.DisplayFormat.Default) } };
+        return plan;
+    }
+
+    /// <summary>
+    /// A single solvent (or a mixture boiling at atmospheric pressure, taken as its start) evaporated
+    /// at the setpoint to the strip's default end: 5 % left, 10 % for a peroxide former.
+    /// </summary>
+    private static Plan WithPureTime(Plan plan)
+    {
+        if (plan.Scale is not PlanScale scale) return plan;
+        bool peroxide = plan.System.Components.Any(s => s.PeroxideClass != Library.PeroxideClass.None);
+        double left = peroxide ? StripPlanner.PeroxideMinimumResidue : StripPlanner.DefaultFractionLeft;
+        double t = ScalePlanner.PureEvaporationTimeS(scale.Setup, plan.System, plan.StartVapor, plan.Vapor, plan.Bath, plan.VacuumSetpoint, plan.Equipment.Coolant, left);
+        string end = $"{100 * (1 - left):0} % evaporated" + (peroxide ? " (a peroxide former keeps 10 %)" : "");
+        return plan with { Scale = scale with { EvaporationTimeS = t, EndText = end } };
+    }
+
+    /// <summary>fill-level: a flask over half full, or a vessel charged below its minimum stirred volume.</summary>
+    private static IEnumerable<Finding> FillLevel(ScaleSetup s, Equipment e)
+    {
+        static Reports.Quantity L(double m3) => Reports.Quantity.Number(m3 * 1e3, "L");
+        if (!s.Vessel && s.ChargeM3 > 0.5 * s.ContainerM3 * (1 + 1e-9))
+            yield return Make("fill-level", Severity.Caution, "flask", ["flask"], ("charge", L(s.ChargeM3)), ("share", Reports.Quantity.Percent(s.ChargeM3 / s.ContainerM3)),
+                ("flask", L(s.ContainerM3)), ("needed", L(Scale.FlaskGeometry.UsualSizesM3.FirstOrDefault(v => s.ChargeM3 <= 0.5 * v, 2 * s.ChargeM3))));
+        if (s.Vessel && s.ChargeM3 < s.MinimumM3 * (1 - 1e-9))
+            yield return Make("fill-level", Severity.Warning, "below-minimum", ["min-volume", "vessel"], ("charge", L(s.ChargeM3)), ("minimum", L(s.MinimumM3)));
     }
 
     /// <summary>

@@ -22,6 +22,10 @@ public sealed record StripStepPlan(double Evaporated, Pressure Pressure, Tempera
 {
     /// <summary>The pot's liquid phases here: one, or two layers (each composition and share) while the pot is in the two-liquid region.</summary>
     public IReadOnlyList<LiquidPhase> LiquidPhases { get; init; } = [];
+    /// <summary>The heat and gas balance here, when the charge's size is known.</summary>
+    public Scale.HeatState? Heat { get; init; }
+    /// <summary>Time from the start of heating to this step [s] (the heat-up included), when the size is known.</summary>
+    public double? TimeS { get; init; }
 }
 
 /// <summary>
@@ -50,6 +54,11 @@ public sealed record StripPlan
     public string? ModelNote { get; init; }
     /// <summary>Charge [mol] by name (the product included).</summary>
     public required IReadOnlyDictionary<string, double> ChargeMol { get; init; }
+
+    /// <summary>Warming the charge before it boils, when the size is known.</summary>
+    public Scale.HeatUp? HeatUp { get; init; }
+    /// <summary>The total time to the end [s], when known.</summary>
+    public double? TotalTimeS => Steps.Count > 0 ? Steps[^1].TimeS : null;
 
     /// <summary>The evaporated fraction between reported steps it was planned with.</summary>
     internal double ReportEvery { get; init; }

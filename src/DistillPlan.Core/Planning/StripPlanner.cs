@@ -131,12 +131,14 @@ public static class StripPlanner
         {
             double evaporated = names.Select((n, i) => s.DistillateMol[n] * weight[i]).Sum() / charged;
             var vapor = Temperature.FromKelvin(s.TemperatureK);
-            var bath = fixedT ? plan.Bath : vapor + plan.Rules.BathToVapor;
+            // The plan's bath step, which the condenser may have made smaller than the ΔT rule's.
+            var bath = fixedT ? plan.Bath : vapor + (plan.Bath - plan.Vapor);
             return new StripStepPlan(evaporated, Pressure.FromPascal(s.PressurePa), vapor, bath,
                 Renormalised(s.Liquid, names), Renormalised(s.Vapor, names),
                 s.DistillateMol, s.ResidueMol, []) { LiquidPhases = s.LiquidPhases };
         }
         var steps = result.Steps.Select(ToStep).ToList();
+        var heatUp = plan.Scale is Scale.PlanScale sized && steps.Count > 0 ? WithTimes(plan, sized.Setup, steps) : null;
 
         // The strip as a whole is checked where it starts; each step then shows only what is new there.
         var overall = steps.Count == 0 ? plan.Checks
@@ -164,8 +166,35 @@ public static class StripPlanner
             Model = result.Model,
             ModelNote = result.FallbackReason ?? result.ModelNote,
             ChargeMol = result.ChargeMol,
+            HeatUp = heatUp,
             ReportEvery = options.ReportEveryEvaporatedFraction,
         };
+    }
+
+    /// <summary>
+    /// Puts the heat balance and the cumulative time on every step (docs/methods.md, Heat and time):
+    /// the wetted area at the step's level, the rate at its temperatures, the trapezoidal rule
+    /// between steps, after the heat-up to the first boiling temperature.
+    /// </summary>
+    private static Scale.HeatUp WithTimes(Plan plan, Scale.ScaleSetup setup, List<StripStepPlan> steps)
+    {
+        var solvents = plan.System.Components;
+        var rate = new double[steps.Count];
+        var evaporated = new double[steps.Count];
+        for (int k = 0; k < steps.Count; k++)
+        {
+            var st = steps[k];
+            double liquid = setup.MolesScale * Scale.HeatBalance.LiquidM3(solvents, n => st.ResidueMol.GetValueOrDefault(n));
+            double[] y = solvents.Select(c => st.VaporComposition.GetValueOrDefault(c.Name)).ToArray();
+            var heat = Scale.HeatBalance.At(setup, plan.System, y, liquid, st.Vapor, st.Bath, st.Pressure, plan.Equipment.Coolant);
+            steps[k] = st with { Heat = heat };
+            rate[k] = heat.EvaporationMolPerS;
+            evaporated[k] = setup.MolesScale * solvents.Sum(c => st.DistillateMol.GetValueOrDefault(c.Name));
+        }
+        var heatUp = Scale.HeatUp.Estimate(setup, plan.Charge, steps[0].Vapor, steps[0].Bath);
+        var times = Scale.EvaporationTime.Cumulative(evaporated, rate);
+        for (int k = 0; k < steps.Count; k++) steps[k] = steps[k] with { TimeS = (heatUp.NotEvaluatedReason is null ? heatUp.TimeS : 0) + times[k] };
+        return heatUp;
     }
 
     private static IReadOnlyList<Finding> Check(Plan plan, StripStepPlan step, bool withAzeotropes)
@@ -176,7 +205,7 @@ public static class StripPlanner
         var survey = withAzeotropes && plan.System is MixtureBoilingSystem m ? m.Azeotropes(step.Pressure.Pascal) : AzeotropeSurvey.None;
         var context = new CheckContext(plan.System, x, plan.Equipment, plan.Rules, step.Vapor, step.Bath, step.Pressure,
             step.Vapor - plan.Rules.VaporToCondenser, y, false, plan.ProductMax, [], survey.Found, survey.Problem,
-            step.LiquidPhases.Count > 0 ? step.LiquidPhases : null);
+            step.LiquidPhases.Count > 0 ? step.LiquidPhases : null, Heat: step.Heat);
         return PlanChecks.Evaluate(context);
     }
 

@@ -36,6 +36,7 @@ public static class PlanReports
             Note = twoLiquids ? "two liquid phases (layers) in the pot at the setpoint" : null,
         });
         var sections = new List<Section> { new("Setpoints", setpoints, []) };
+        if (p.Scale is Scale.PlanScale scale) sections.Add(new Section("Heat and time", ScaleRows.ForPlan(p, scale), []));
         if (p.Ramp is StripPlan ramp && ramp.Steps.Count > 1)
             sections.Add(new Section("Pressure ramp", [], [StepsTable(ramp, "ramp")]));
         // After the ramp, so the ramp stays the report's main table (CSV).
@@ -92,6 +93,7 @@ public static class PlanReports
             new("End reason", Quantity.Words(EndCode(s.EndReason)), "end_reason") { MachineOnly = true },
             new("Charge", s.ChargeMol.Values.Select(v => Quantity.Number(v, "mol")).ToList(), "charge_mol") { Names = s.ChargeMol.Keys.ToList(), MachineOnly = true },
         };
+        how.AddRange(ScaleRows.ForStrip(s));
         return new Report
         {
             Kind = "strip",
@@ -131,9 +133,12 @@ public static class PlanReports
         var all = s.ChargeMol.Keys.ToList();
         columns.AddRange(all.Select(n => new Column($"distillate {n}", QuantityKind.Number, "distillate_mol", n) { NumberUnit = "mol", MachineOnly = true }));
         columns.AddRange(all.Select(n => new Column($"residue {n}", QuantityKind.Number, "residue_mol", n) { NumberUnit = "mol", MachineOnly = true }));
+        bool timed = s.Steps.Count > 0 && s.Steps.All(st => st.Heat is not null);
+        if (timed) columns.InsertRange(4, ScaleRows.StepColumns());
         var rows = s.Steps.Select(st => new TableRow(
             [
                 Quantity.Percent(st.Evaporated), Quantity.Of(st.Pressure), Quantity.Of(st.Vapor), Quantity.Of(st.Bath),
+                .. timed ? ScaleRows.StepCells(st) : [],
                 .. names.Select(n => Quantity.MoleFraction(st.Liquid[n])),
                 .. names.Select(n => Quantity.MoleFraction(st.VaporComposition[n])),
                 .. all.Select(n => Quantity.Number(st.DistillateMol[n], "mol")),

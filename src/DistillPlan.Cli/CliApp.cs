@@ -32,6 +32,7 @@ public static class CliApp
         root.Subcommands.Add(MixtureCommand.Build());
         root.Subcommands.Add(AzeotropeCommand.Build());
         root.Subcommands.Add(StripCommand.Build());
+        root.Subcommands.Add(SwapCommand.Build());
         root.Subcommands.Add(FitCommand.Build());
         return root;
     }

@@ -41,8 +41,17 @@ public static class JsonReport
     public static JsonObject ToNode(Report r)
     {
         var o = new JsonObject { ["kind"] = r.Kind, ["title"] = r.Title };
-        foreach (var row in r.Sections.SelectMany(s => s.Rows).Concat(r.Header)) AddRow(o, row);
-        foreach (var table in r.Sections.SelectMany(s => s.Tables)) o[table.JsonKey] = TableNode(table);
+        var flat = r.Sections.Where(s => s.JsonGroup is null).ToList();
+        foreach (var row in flat.SelectMany(s => s.Rows).Concat(r.Header)) AddRow(o, row);
+        foreach (var table in flat.SelectMany(s => s.Tables)) o[table.JsonKey] = TableNode(table);
+        foreach (var section in r.Sections.Where(s => s.JsonGroup is not null))
+        {
+            var group = new JsonObject();
+            foreach (var row in section.Rows) AddRow(group, row);
+            foreach (var table in section.Tables) group[table.JsonKey] = TableNode(table);
+            if (o[section.JsonGroup!] is not JsonArray list) o[section.JsonGroup!] = list = [];
+            list.Add((JsonNode)group);
+        }
         o["checks"] = Findings(r.Checks);
         o["notes"] = Findings(r.Notes);
         o["assumptions"] = new JsonArray([.. r.Assumptions.Select(AssumptionNode)]);

@@ -206,6 +206,9 @@ public static class PlanReports
         ["dortmund"] = "modified UNIFAC (Dortmund): Weidlich, Gmehling, Ind. Eng. Chem. Res. 26 (1987) 1372; Gmehling, Li, Schiller, Ind. Eng. Chem. Res. 32 (1993) 178; parameters as published by DDBST (2016 set)",
     };
 
+    /// <summary>The sources a plan relied on: its solvents' fields and the activity model.</summary>
+    internal static IReadOnlyList<SourceCitation> SourcesOf(Plan p, ReportContext context) => Sources(p, context);
+
     private static IReadOnlyList<SourceCitation> Sources(Plan p, ReportContext context)
     {
         var keys = p.System.Components.SelectMany(s => s.Sources.Values).Distinct().OrderBy(k => k, StringComparer.Ordinal).ToList();

@@ -57,7 +57,15 @@ public sealed record Table(string JsonKey, IReadOnlyList<Column> Columns, IReadO
 /// <param name="Heading">Heading.</param>
 /// <param name="Rows">Labelled values.</param>
 /// <param name="Tables">Tables.</param>
-public sealed record Section(string Heading, IReadOnlyList<Row> Rows, IReadOnlyList<Table> Tables);
+public sealed record Section(string Heading, IReadOnlyList<Row> Rows, IReadOnlyList<Table> Tables)
+{
+    /// <summary>
+    /// When set, JSON writes this section as one object (its rows and tables) appended to the
+    /// list of this name, e.g. each swap method under "methods"; otherwise its rows and tables
+    /// go to the top level.
+    /// </summary>
+    public string? JsonGroup { get; init; }
+}
 
 /// <summary>One line of a plot: points in the report's typed quantities.</summary>
 /// <param name="Name">Legend text.</param>

@@ -22,13 +22,15 @@ internal static class ScaleRows
                 Note = $"U·A·ΔT: {Num(s.Setup.UWPerM2K)} W/(m² K) × {Sig(h.AreaM2)} m² wetted × {Num(p.Bath.Kelvin - p.Vapor.Kelvin)} K",
             },
             new("Evaporation rate", MassRate(h.EvaporationGPerH)) { Note = VolumeRate(h.EvaporationMLPerH) + $" at the start; ΔHvap {Num(h.LatentHeatJPerMol / 1000)} kJ/mol" },
-            new("Condenser load", Quantity.Percent(h.CondenserShare)) { Note = $"{Power(h.HeatDutyW).Format()} of {Power(h.CondenserCapacityW).Format()}" },
-            new("Pump load", Quantity.Percent(h.PumpShare))
+            new("Condenser load", Quantity.Percent(h.CondenserShare)) { Note = PowerPair(h.HeatDutyW, h.CondenserCapacityW) + " it can take" },
+        };
+        // At atmospheric pressure no pump runs: what passes the condenser leaves by the vent.
+        if (!p.AtAtmosphericPressure)
+            rows.Add(new("Pump load", Quantity.Percent(h.PumpShare))
             {
                 Note = $"{Num(h.GasLoadM3PerS * 3600)} m³/h of {Num(h.PumpSpeedM3PerS * 3600)} m³/h at the setpoint (leak air and solvent vapour)",
-            },
-            new("Solvent to pump", MassRate(h.SolventToPumpGPerH)) { Note = h.LossShare is double l ? $"{Pct(l)} of what evaporates" : null },
-        };
+            });
+        rows.Add(new(p.AtAtmosphericPressure ? "Solvent to vent" : "Solvent to pump", MassRate(h.SolventToPumpGPerH)) { Note = h.LossShare is double l ? $"{Pct(l)} of what evaporates" : null });
         if (s.TotalTimeS is double total)
         {
             string heat = s.HeatUp.NotEvaluatedReason is string why ? $"heat-up not included ({why})" : $"heat-up {Duration(s.HeatUp.TimeS)}";
@@ -107,6 +109,10 @@ internal static class ScaleRows
         if (min < 120) return Num(Math.Round(min)) + " min";
         return (min / 60).ToString("0.#", CultureInfo.InvariantCulture) + " h";
     }
+
+    // Two powers in one unit, the larger deciding: "7.3 kW of 24.4 kW".
+    private static string PowerPair(double a, double b) => Math.Max(a, b) >= 10000
+        ? $"{Num(a / 1000)} kW of {Num(b / 1000)} kW" : $"{Num(a)} W of {Num(b)} W";
 
     private static Quantity Power(double w) => w >= 10000 ? Quantity.Number(w / 1000, "kW") : Quantity.Number(w, "W");
     private static Quantity MassRate(double gPerH) => gPerH >= 10000 ? Quantity.Number(gPerH / 1000, "kg/h") : Quantity.Number(gPerH, "g/h");

@@ -150,7 +150,7 @@ public sealed record ScaleSetup
         double leak = LeakKgPerS(e, container);
         if (e.LeakAirKgPerS is null)
             list.Add(new("leak-rate", "air leak into the vacuum", Quantity.Number(leak * 3.6e6, "g/h"), true,
-                (e.IsVessel ? "plant vessel, 0.5–5 kg/h; 1 kg/h per m³^(2/3), at least 0.5 kg/h; " : "tight laboratory glassware, 0.5 mbar·L/s (0.1–1); ") + ScaleRules.RuleOfThumb));
+                (e.IsVessel ? "plant vessel, 0.5–5 kg/h; 1 kg/h per m³^(2/3), at least 0.5 kg/h; " : "tight laboratory glassware leaks 0.4–4 g/h of air; ") + ScaleRules.RuleOfThumb));
 
         double minimum = e.MinimumVolumeM3 ?? (e.IsVessel ? ScaleRules.VesselMinimumShare * container : 0);
         if (e.IsVessel && e.MinimumVolumeM3 is null)

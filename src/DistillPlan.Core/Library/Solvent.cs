@@ -29,6 +29,11 @@ public enum SolventFlags
     Foaming = 4,
     /// <summary>Takes up water from the air.</summary>
     Hygroscopic = 8,
+    /// <summary>
+    /// Low electrical conductivity (below about 50 pS/m; IEC TS 60079-32-1, NFPA 77): charges up when
+    /// it flows, is stirred or sprayed, so a plant vessel and its lines must be earthed (hydrocarbons, ethers …).
+    /// </summary>
+    LowConductivity = 16,
 }
 
 /// <summary>One solvent of the library, in SI units, with the source key of each number.</summary>

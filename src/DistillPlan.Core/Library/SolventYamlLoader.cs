@@ -186,7 +186,8 @@ public static class SolventYamlLoader
                     "toxic-vapor" => SolventFlags.ToxicVapor,
                     "foaming" => SolventFlags.Foaming,
                     "hygroscopic" => SolventFlags.Hygroscopic,
-                    _ => throw f.Error($"'{w}' is not a flag; allowed: bumping-prone, toxic-vapor, foaming, hygroscopic"),
+                    "low-conductivity" => SolventFlags.LowConductivity,
+                    _ => throw f.Error($"'{w}' is not a flag; allowed: bumping-prone, toxic-vapor, foaming, hygroscopic, low-conductivity"),
                 };
             }
             SourceOf(fl, "flags");

@@ -82,6 +82,21 @@ public class LiquidHeatCapacityTests
     }
 
     [Fact]
+    public void Every_shipped_solvent_has_Cp_except_the_fourteen_Perry_2_153_does_not_list()
+    {
+        // The shared data's README lists what its Perry 2-153 subset lacks (heptane: given there with
+        // DIPPR-114, not transcribed). Every other shipped solvent must have its row.
+        string[] lacking =
+        [
+            "isobutanol", "2-methyltetrahydrofuran", "trifluorotoluene", "1-methoxy-2-propanol", "isopropyl acetate",
+            "1,2-dimethoxyethane", "pyridine", "sulfolane", "N,N-dimethylacetamide", "dimethyl carbonate",
+            "N-methyl-2-pyrrolidone", "cyclopentyl methyl ether", "diglyme", "heptane",
+        ];
+        var without = ShippedLibrary.Instance.Solvents.Where(s => s.LiquidHeatCapacity is null).Select(s => s.Name).Order().ToList();
+        Assert.Equal(lacking.Select(n => ShippedLibrary.Instance.Find(n).Name).Order().ToList(), without);
+    }
+
+    [Fact]
     public void A_solvent_Perry_does_not_list_has_no_Cp_rather_than_a_guess()
     {
         // Perry 2-153 gives heptane with the DIPPR-114 equation, which the library does not carry.

@@ -35,6 +35,11 @@ public sealed record Finding
     public IReadOnlyList<string> Settings { get; init; } = [];
     /// <summary>False when the check could not be evaluated; <see cref="Values"/> then holds the reason.</summary>
     public bool Evaluated { get; init; } = true;
+    /// <summary>
+    /// The equipment the finding is worded for: a vessel's finding speaks of the jacket and the
+    /// stirrer, a rotary evaporator's of the bath, the flask and rotation (<see cref="Wording"/>).
+    /// </summary>
+    public Planning.ApparatusKind Apparatus { get; init; } = Planning.ApparatusKind.RotaryEvaporator;
 
     /// <summary>The severity as the lower-case word used in output.</summary>
     public string SeverityWord => Severity.ToString().ToLowerInvariant();

@@ -53,7 +53,8 @@ public static class PlanChecks
         foreach (var s in present) Add(found, EstimatedCurve(s));
         if (c.AzeotropeProblem is string why) found.Add(NotEvaluated("azeotrope", why, []));
         foreach (var a in c.Azeotropes) found.Add(AzeotropeCheck(a, c));
-        return found.OrderByDescending(f => f.Severity).ToList();
+        // Worded for the equipment the plan runs on (a jacket and a stirrer, or a bath and a flask).
+        return found.OrderByDescending(f => f.Severity).Select(f => f with { Apparatus = c.Equipment.Apparatus }).ToList();
     }
 
     private static void Add(List<Finding> list, Finding? f) { if (f is not null) list.Add(f); }

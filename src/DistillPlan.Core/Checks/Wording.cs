@@ -122,7 +122,7 @@ public static partial class Wording
         // Notes: what the plan did and why (severity info).
         ["model/"] = new("{note}.", ""),
         ["model/approximate"] = new("Model answer is {note}.", "Treat setpoints and the ramp as rough: approach the setpoint from above and watch the boiling."),
-        ["no-vacuum-needed/"] = new("The charge boils at {boiling} at the local atmospheric pressure ({atmosphere}), at or below the preferred vapour temperature: no vacuum is needed; use a mild bath.", ""),
+        ["no-vacuum-needed/"] = new("The charge boils at {boiling} at the local atmospheric pressure ({atmosphere}), at or below the preferred vapour temperature: no vacuum is needed; heat gently.", ""),
         ["pressure-ramp/"] = new("Hold the vapour at {vapor}: the pressure must fall from {from} to {to} as the light component leaves ({end}); the residue is then {residue_share} {residue}.", ""),
         ["pressure-ramp/two-liquids"] = new("Hold the vapour at {vapor}: both liquid layers stay in the pot to the end ({end}), so the pressure stays at {from} (three-phase boiling); {first} leaves first and {residue} remains: the residue is then {residue_share} {residue}.", ""),
         ["pressure-ramp/two-liquids-then-one"] = new("Hold the vapour at {vapor}: while both liquid layers are in the pot the pressure stays near {from} (three-phase boiling), then falls to {to} as one liquid ({end}); {first} leaves first and {residue} remains: the residue is then {residue_share} {residue}.", ""),
@@ -138,7 +138,7 @@ public static partial class Wording
         ["strip-end/minimum-residue"] = new("minimum residue reached: {left} of the charge ({basis}) is kept because {solvents} forms peroxides; do not evaporate further", ""),
         ["strip-end/residual"] = new("{component} is down to mole fraction {reached} in the liquid (target {target})", ""),
         ["strip-end/pump-limit"] = new("the pressure has fallen to what the pump can hold, {floor} (twice its ultimate pressure {pump_ultimate})", ""),
-        ["strip-end/temperature-limit"] = new("the boiling temperature has reached {vapor}, where the bath reaches {limit} ({bath})", ""),
+        ["strip-end/temperature-limit"] = new("the boiling temperature has reached {vapor}, where the heating reaches {limit} ({bath})", ""),
         ["strip-end/dry"] = new("practically dry: less than 1 ppm of the solvent is left", ""),
         ["strip-end/failed"] = new("the strip stopped early: {reason}", "Treat the last steps as approximate; stop the evaporation by hand before this point."),
     };
@@ -182,20 +182,22 @@ public static partial class Wording
             {
                 parts[1] switch
                 {
-                    "coolant" => "colder coolant (a chiller, or dry ice in a cold-finger condenser)",
-                    "pot-freezing" => "a higher limit for the bath or the product, so the pot can stay liquid",
+                    "coolant" => ColderCoolant(f),
+                    "pot-freezing" => "a higher limit for the heating or the product, so the pot can stay liquid",
                     _ => "a better pump (lower ultimate pressure)",
                 },
             };
-            if (parts[2] == "bath-limit") remedies.Add("a heating medium with a higher limit (oil bath or jacket)");
+            if (parts[2] == "bath-limit") remedies.Add(HigherHeatingLimit(f));
             if (parts[2] != "atmospheric-boiling-point") remedies.Add("smaller ΔT steps (--delta-t)");
             return "Resolve with: " + string.Join("; or ", remedies) + ".";
         }
         return Fill(Find(f).Action, f, format);
     }
 
+    // A vessel's finding takes the vessel's wording where it differs (Wording.Vessel.cs).
     private static Entry Find(Finding f) =>
-        Entries.TryGetValue(f.Code + "/" + f.Variant, out var e) ? e
+        f.Apparatus == Planning.ApparatusKind.JacketedVessel && VesselEntries.TryGetValue(f.Code + "/" + f.Variant, out var v) ? v
+        : Entries.TryGetValue(f.Code + "/" + f.Variant, out var e) ? e
         : throw new InvalidOperationException($"no wording for finding {f.Code}/{f.Variant}");
 
     [GeneratedRegex(@"\{([a-z_]+)\}")]

@@ -29,6 +29,11 @@ public enum SolventFlags
     Foaming = 4,
     /// <summary>Takes up water from the air.</summary>
     Hygroscopic = 8,
+    /// <summary>
+    /// Low electrical conductivity (below about 50 pS/m; IEC TS 60079-32-1, NFPA 77): charges up when
+    /// it flows, is stirred or sprayed, so a plant vessel and its lines must be earthed (hydrocarbons, ethers …).
+    /// </summary>
+    LowConductivity = 16,
 }
 
 /// <summary>One solvent of the library, in SI units, with the source key of each number.</summary>
@@ -81,6 +86,10 @@ public sealed record Solvent
     public required VaporPressureModel VaporPressure { get; init; }
     /// <summary>Enthalpy of vaporization, when tabulated.</summary>
     public IEnthalpyOfVaporization? EnthalpyOfVaporization { get; init; }
+    /// <summary>Liquid heat capacity, DIPPR-100 (Perry Table 2-153 in the shipped library), when the library has it.</summary>
+    public Dippr100? LiquidHeatCapacity { get; init; }
+    /// <summary>Liquid density as a function of temperature, DIPPR-105 (Perry Table 2-32), when the library has it.</summary>
+    public Dippr105? LiquidDensityCurve { get; init; }
     /// <summary>Source key of each field, by field name as written in the YAML.</summary>
     public IReadOnlyDictionary<string, string> Sources { get; init; } = new Dictionary<string, string>();
     /// <summary>File and line the entry was read from, for messages.</summary>
@@ -89,6 +98,21 @@ public sealed record Solvent
     /// <summary>ΔHvap at T [J/mol]: tabulated when available, else implied by the vapour-pressure curve.</summary>
     public double EnthalpyJPerMol(double temperatureK) =>
         EnthalpyOfVaporization?.At(temperatureK) ?? VaporPressure.ImpliedEnthalpyJPerMol(temperatureK);
+
+    /// <summary>
+    /// Liquid heat capacity Cp [J/(mol·K)] at T [K]; null when the library has no curve for this
+    /// solvent. Clamped to the curve's published range: outside it, the value at the nearer end
+    /// (the polynomial is not extrapolated), so check <see cref="Dippr100.Covers"/> where it matters.
+    /// </summary>
+    public double? LiquidHeatCapacityJPerMolK(double temperatureK) => LiquidHeatCapacity?.At(temperatureK);
+
+    /// <summary>
+    /// Liquid density [kg/m³] at T [K] from the density curve; null when the library has no curve
+    /// (then only <see cref="LiquidDensityKgPerM3"/>, near room temperature, is known). Clamped to the
+    /// curve's published range: outside it, the value at the nearer end.
+    /// </summary>
+    public double? LiquidDensityKgPerM3At(double temperatureK) =>
+        LiquidDensityCurve is { } rho ? rho.At(temperatureK) * MolarMassGPerMol / 1000.0 : null;
 
     /// <summary>Molar volume of the liquid [m³/mol], for volume amounts.</summary>
     public double? MolarVolumeM3PerMol => LiquidDensityKgPerM3 is double rho ? MolarMassGPerMol / 1000.0 / rho : null;

@@ -21,7 +21,8 @@ public static class SolventYamlLoader
 
     private static readonly string[] EntryKeys =
     [
-        "name", "aliases", "cas", "formula", "molar_mass_g_per_mol", "liquid_density_kg_per_m3", "melting_point_k",
+        "name", "aliases", "cas", "formula", "molar_mass_g_per_mol", "liquid_density_kg_per_m3", "liquid_density_curve",
+        "liquid_heat_capacity", "melting_point_k",
         "normal_boiling_point_k", "critical", "vapor_pressure", "enthalpy_of_vaporization", "flash_point_k",
         "autoignition_k", "peroxide_class", "flags", "unifac", "notes",
     ];
@@ -153,6 +154,8 @@ public static class SolventYamlLoader
 
         IEnthalpyOfVaporization? dh = null;
         if (e.Optional("enthalpy_of_vaporization") is { } h) dh = ReadEnthalpy(h, tc, SourceOf);
+        var cp = e.Optional("liquid_heat_capacity") is { } cpc ? LiquidPropertyReader.HeatCapacity(cpc, SourceOf) : null;
+        var rhoCurve = e.Optional("liquid_density_curve") is { } rc ? LiquidPropertyReader.DensityCurve(rc, molarMass, SourceOf) : null;
 
         var peroxide = PeroxideClass.None;
         if (e.Optional("peroxide_class") is { } pcls)
@@ -183,7 +186,8 @@ public static class SolventYamlLoader
                     "toxic-vapor" => SolventFlags.ToxicVapor,
                     "foaming" => SolventFlags.Foaming,
                     "hygroscopic" => SolventFlags.Hygroscopic,
-                    _ => throw f.Error($"'{w}' is not a flag; allowed: bumping-prone, toxic-vapor, foaming, hygroscopic"),
+                    "low-conductivity" => SolventFlags.LowConductivity,
+                    _ => throw f.Error($"'{w}' is not a flag; allowed: bumping-prone, toxic-vapor, foaming, hygroscopic, low-conductivity"),
                 };
             }
             SourceOf(fl, "flags");
@@ -227,6 +231,8 @@ public static class SolventYamlLoader
             UnifacGroups = groups,
             VaporPressure = new VaporPressureModel(name, curves, tc, pc),
             EnthalpyOfVaporization = dh,
+            LiquidHeatCapacity = cp,
+            LiquidDensityCurve = rhoCurve,
             Sources = fieldSources,
             Origin = $"{e.File}:{e.Line}",
         };

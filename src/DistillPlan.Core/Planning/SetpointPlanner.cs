@@ -181,7 +181,15 @@ public static partial class SetpointPlanner
         if (ramp.Steps.Count > 1) notes.Add(RampNote(ramp));
         plan = plan with { Ramp = ramp, Notes = notes };
         if (plan.Scale is PlanScale scale && ramp.Steps.Count > 0 && ramp.Steps[^1].TimeS is double end)
-            plan = plan with { Scale = scale with { EvaporationTimeS = end - scale.HeatUp.TimeS, EndText = ramp.EndText(Reports.DisplayFormat.Default) } };
+        {
+            // Latent heat step by step (trapezoidal in the evaporated moles), after the heat-up.
+            double energy = scale.HeatUp.EnergyJ;
+            double MolOf(StripStepPlan st) => scale.Setup.MolesScale * st.DistillateMol.Values.Sum();
+            for (int k = 1; k < ramp.Steps.Count; k++)
+                energy += (MolOf(ramp.Steps[k]) - MolOf(ramp.Steps[k - 1])) * 0.5 * (ramp.Steps[k].Heat!.LatentHeatJPerMol + ramp.Steps[k - 1].Heat!.LatentHeatJPerMol);
+            double heatUp = scale.HeatUp.NotEvaluatedReason is null ? scale.HeatUp.TimeS : 0;
+            plan = plan with { Scale = scale with { EvaporationTimeS = end - heatUp, EndText = "the end of the pressure ramp below", EnergyJ = energy } };
+        }
         return plan;
     }
 
@@ -196,7 +204,10 @@ public static partial class SetpointPlanner
         double left = peroxide ? StripPlanner.PeroxideMinimumResidue : StripPlanner.DefaultFractionLeft;
         double t = ScalePlanner.PureEvaporationTimeS(scale.Setup, plan.System, plan.StartVapor, plan.Vapor, plan.Bath, plan.VacuumSetpoint, plan.Equipment.Coolant, left);
         string end = $"{100 * (1 - left):0} % evaporated" + (peroxide ? " (a peroxide former keeps 10 %)" : "");
-        return plan with { Scale = scale with { EvaporationTimeS = t, EndText = end } };
+        // Heat taken up: warming the charge, then the latent heat of what evaporates.
+        double evaporatedMol = (1 - left) * scale.Setup.ChargeM3 / plan.System.Components[0].MolarVolumeM3PerMol!.Value;
+        double energy = scale.HeatUp.EnergyJ + evaporatedMol * scale.Start.LatentHeatJPerMol;
+        return plan with { Scale = scale with { EvaporationTimeS = t, EndText = end, EnergyJ = energy } };
     }
 
     /// <summary>fill-level: a flask over half full, or a vessel charged below its minimum stirred volume.</summary>

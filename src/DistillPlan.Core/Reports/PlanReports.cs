@@ -14,7 +14,7 @@ public static class PlanReports
         bool mixture = names.Count > 1;
         var setpoints = new List<Row>
         {
-            new("Bath / heating", Quantity.Of(p.Bath), "bath_temperature"),
+            new(p.Equipment.IsVessel || p.Equipment.Heating == HeatingMedium.Jacket ? "Jacket" : "Bath", Quantity.Of(p.Bath), "bath_temperature"),
             new("Vapour temperature", Quantity.Of(p.Vapor), "vapor_temperature") { Note = "set by: " + p.LimitingConstraint },
             // A pressure the pump cannot hold is never presented as the setpoint (see the conflict).
             p.SetpointReachable
@@ -71,7 +71,7 @@ public static class PlanReports
             Notes = p.Notes,
             Assumptions = p.Assumptions,
             Sources = Sources(p, context),
-            Cautions = Checks.Cautions.General,
+            Cautions = Checks.Cautions.For(p.Equipment, p.System.Components),
             Plots = [CurvePlot(p), .. p.Ramp is StripPlan r && r.Steps.Count > 1 ? [RampPlot(r)] : Array.Empty<Plot>()],
         };
     }
@@ -108,7 +108,7 @@ public static class PlanReports
             Notes = [.. p.Notes.Where(n => n.Code != "pressure-ramp"), s.End],
             Assumptions = p.Assumptions,
             Sources = Sources(p, context),
-            Cautions = Checks.Cautions.General,
+            Cautions = Checks.Cautions.For(p.Equipment, p.System.Components),
             Plots = [RampPlot(s)],
         };
     }

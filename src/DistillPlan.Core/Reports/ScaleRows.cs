@@ -33,13 +33,17 @@ internal static class ScaleRows
         rows.Add(new(p.AtAtmosphericPressure ? "Solvent to vent" : "Solvent to pump", MassRate(h.SolventToPumpGPerH)) { Note = h.LossShare is double l ? $"{Pct(l)} of what evaporates" : null });
         if (s.TotalTimeS is double total)
         {
-            string heat = s.HeatUp.NotEvaluatedReason is string why ? $"heat-up not included ({why})" : $"heat-up {Duration(s.HeatUp.TimeS)}";
+            string heat = HeatUpWords(s.HeatUp);
             rows.Add(new("Time", Quantity.Words("about " + Duration(total)))
             {
                 Note = $"{Volume(s.Setup.ChargeM3)}: {heat}, then {Duration(s.EvaporationTimeS!.Value)} to {s.EndText}",
             });
         }
-        if (s.EnergyJ is double e) rows.Add(new("Energy", Quantity.Number(e / 3.6e6, "kWh")));
+        if (s.EnergyJ is double e)
+        {
+            rows.Add(new("Heat to put in", Quantity.Number(e / 3.6e6, "kWh")) { Note = $"warming {Num(s.HeatUp.EnergyJ / 3.6e6)} kWh, the rest latent heat" });
+            rows.Add(new("Energy", Quantity.Number(e / 3.6e6, "kWh"), "heat_energy_kwh") { MachineOnly = true });
+        }
         // The contract's machine fields (docs/interface.md).
         rows.AddRange(Machine(h));
         if (s.TotalTimeS is double t) rows.Add(new("Time", Quantity.Number(t / 60, "min"), "time_min") { MachineOnly = true });
@@ -54,7 +58,7 @@ internal static class ScaleRows
     public static IEnumerable<Row> ForStrip(StripPlan s)
     {
         if (s.TotalTimeS is not double total || s.HeatUp is not HeatUp up || s.Setpoints.Scale is not PlanScale scale) yield break;
-        string heat = up.NotEvaluatedReason is string why ? $"heat-up not included ({why})" : $"heat-up {Duration(up.TimeS)}";
+        string heat = HeatUpWords(up);
         yield return new("Time", Quantity.Words("about " + Duration(total))) { Note = $"{Volume(scale.Setup.ChargeM3)}: {heat}, then {Duration(total - (up.NotEvaluatedReason is null ? up.TimeS : 0))} to the end" };
         yield return new("Time", Quantity.Number(total / 60, "min"), "time_min") { MachineOnly = true };
         yield return new("Heat-up", Quantity.Number(up.TimeS / 60, "min"), "heat_up_time_min") { MachineOnly = true };
@@ -99,6 +103,11 @@ internal static class ScaleRows
             Quantity.Number(h.PumpSpeedM3PerS * 3600, "m³/h"), Quantity.Number(h.SolventToPumpGPerH, "g/h"),
         ];
     }
+
+    private static string HeatUpWords(HeatUp up) =>
+        up.NotEvaluatedReason is string why ? $"heat-up not included ({why})"
+        : $"heat-up {Duration(up.TimeS)} from the start temperature"
+          + (up.EstimatedCpFor.Count > 0 ? $" (Cp of {string.Join(", ", up.EstimatedCpFor)} taken as {HeatUp.TypicalOrganicCpJPerGK:0.0} J/(g K), a rule of thumb)" : "");
 
     /// <summary>A duration as people say it: "25 min", "3.5 h", "more than a week".</summary>
     public static string Duration(double seconds)

@@ -10,6 +10,12 @@ namespace DistillPlan.Core.Scale;
 /// <param name="NotEvaluatedReason">Why it was not worked out (a solvent without a heat capacity), or null.</param>
 public sealed record HeatUp(double TimeS, double EnergyJ, string? NotEvaluatedReason)
 {
+    /// <summary>Solvents whose Cp was estimated (no curve in the library), or empty.</summary>
+    public IReadOnlyList<string> EstimatedCpFor { get; init; } = [];
+
+    /// <summary>Liquid Cp of organic solvents when none is tabulated [J/(g·K)]: most lie between 1.7 and 2.4 (rule of thumb, common practice, from memory).</summary>
+    public const double TypicalOrganicCpJPerGK = 2.0;
+
     /// <summary>
     /// Heat-up at a constant bath: C·dT/dt = U·A·(T_bath − T), so
     /// t = C/(U·A)·ln((T_bath − T_start)/(T_bath − T_boil)) and the energy is C·(T_boil − T_start),
@@ -21,18 +27,20 @@ public sealed record HeatUp(double TimeS, double EnergyJ, string? NotEvaluatedRe
         if (start >= boil) return new HeatUp(0, 0, null);
         double mean = 0.5 * (start + boil);
         double c = 0;
+        var estimated = new List<string>();
         foreach (var component in charge.Components)
         {
-            if (MolarHeatCapacity(component.Solvent, mean) is not double cp)
-                return new HeatUp(0, 0, "no liquid heat capacity for " + component.Solvent.Name);
+            double? tabulated = MolarHeatCapacity(component.Solvent, mean);
+            if (tabulated is null) estimated.Add(component.Solvent.Name);
+            double cp = tabulated ?? TypicalOrganicCpJPerGK * component.Solvent.MolarMassGPerMol;
             c += component.Moles * setup.MolesScale * cp;
         }
         double ua = setup.UWPerM2K * setup.Geometry.WettedAreaM2(setup.ChargeM3);
         double energy = c * (boil - start);
-        if (bath.Kelvin <= boil || ua <= 0) return new HeatUp(double.PositiveInfinity, energy, null);
-        return new HeatUp(c / ua * Math.Log((bath.Kelvin - start) / (bath.Kelvin - boil)), energy, null);
+        if (bath.Kelvin <= boil || ua <= 0) return new HeatUp(double.PositiveInfinity, energy, null) { EstimatedCpFor = estimated };
+        return new HeatUp(c / ua * Math.Log((bath.Kelvin - start) / (bath.Kelvin - boil)), energy, null) { EstimatedCpFor = estimated };
     }
 
     /// <summary>Liquid Cp [J/(mol·K)] from the library (DIPPR-100, Perry Table 2-153), or null.</summary>
-    private static double? MolarHeatCapacity(Solvent s, double temperatureK) => s is null ? temperatureK : null; // MERGE-CP
+    private static double? MolarHeatCapacity(Solvent s, double temperatureK) => s.LiquidHeatCapacityJPerMolK(temperatureK);
 }

@@ -108,7 +108,7 @@ public static class PlanSettings
                 b.Equipment = b.Equipment with { Heating = medium, HeatingMax = Equipment.TypicalLimit(medium) };
             },
             Value = b => Quantity.Words(Equipment.Word(b.Equipment.Heating)),
-            DefaultBasis = b => b.Equipment.IsVessel ? "a jacketed vessel is heated through its jacket" : "a rotary evaporator's water bath, " + CommonPractice,
+            DefaultBasis = b => (b.Equipment.IsVessel ? "a jacketed vessel is heated through its jacket, " : "a rotary evaporator's water bath, ") + CommonPractice,
         },
         new()
         {

@@ -10,6 +10,7 @@ public class HelpTextTests
     [InlineData("mixture")]
     [InlineData("azeotrope")]
     [InlineData("strip")]
+    [InlineData("swap")]
     [InlineData("fit")]
     public void Help_text_matches_the_checked_in_copy(string verb)
     {

@@ -38,8 +38,11 @@ public static class PlotFile
     {
         var plt = new ScottPlot.Plot();
         plt.Title(p.Title);
-        plt.XLabel($"{p.XLabel} ({f.UnitOf(p.XKind)})");
-        plt.YLabel($"{p.YLabel} ({f.UnitOf(p.YKind)})");
+        // A plain-number axis takes its unit from its values (L of new solvent).
+        string xUnit = f.UnitOf(p.XKind, p.Series.SelectMany(s => s.X).FirstOrDefault().Unit);
+        string yUnit = f.UnitOf(p.YKind, p.Series.SelectMany(s => s.Y).FirstOrDefault().Unit);
+        plt.XLabel(xUnit.Length > 0 ? $"{p.XLabel} ({xUnit})" : p.XLabel);
+        plt.YLabel(yUnit.Length > 0 ? $"{p.YLabel} ({yUnit})" : p.YLabel);
         var palette = new ScottPlot.Palettes.Category10();
         int k = 0;
         foreach (var s in p.Series)

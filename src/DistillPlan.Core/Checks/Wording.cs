@@ -72,6 +72,8 @@ public static partial class Wording
             "Check for leaks before starting; a larger pump or a colder condenser gives margin."),
         ["swap/dilution-only"] = new("At the end of the {method} swap the old solvent is {vapor} of the vapour but {liquid} of the liquid: it leaves more slowly than {solvent}, so the swap works by dilution alone and takes much solvent.",
             "Check the pair for an azeotrope; a different pressure, or a final strip at higher temperature, may help."),
+        ["swap/two-liquids"] = new("In the {method} swap the pot splits into two liquid layers (from about {added} of {solvent} added): while both layers are there it boils as a heteroazeotrope and the distillate separates in the receiver.",
+            "That helps to take the old solvent off (azeotropic drying is common practice); keep stirring so both layers boil, and check the receiver for a second layer."),
         ["swap/not-reached"] = new("The {method} swap stops before the target: {reason}; the old solvent is still {residual} by mass.",
             "Raise the heating limit if the product allows, hold a lower pressure, or accept a higher residual."),
         ["scale/not-computed"] = new("Heat duty, rates and time not worked out: {reason}.",

@@ -40,6 +40,8 @@ public sealed record SwapMethodPlan
     public required double FinalVolumeL { get; init; }
     /// <summary>Reported points.</summary>
     public required IReadOnlyList<SwapStepPlan> Steps { get; init; }
+    /// <summary>New solvent added [L] when the pot was first seen in two liquid layers, or null when it stayed one liquid.</summary>
+    public double? TwoLiquidsAt { get; init; }
     /// <summary>True when the target was reached.</summary>
     public bool Reached => End == SwapEnd.TargetReached;
 
@@ -54,6 +56,8 @@ public sealed record SwapPlan
     public required Plan Setpoints { get; init; }
     /// <summary>The new solvent.</summary>
     public required string NewSolvent { get; init; }
+    /// <summary>The new solvent's library entry (for its cautions and sources).</summary>
+    public Library.Solvent? NewSolventEntry { get; init; }
     /// <summary>The old solvents (the charge's others).</summary>
     public required IReadOnlyList<string> OldSolvents { get; init; }
     /// <summary>The target.</summary>

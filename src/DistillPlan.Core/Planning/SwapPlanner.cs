@@ -109,7 +109,7 @@ public static class SwapPlanner
             : $"vapour temperature held at {plan.Vapor}; the pressure falls as {newSolvent.Name} takes over (never below {hold}, where the pump holds and the temperature rises)";
         return new SwapPlan
         {
-            Setpoints = plan, NewSolvent = newSolvent.Name, OldSolvents = solvents.Where((_, i) => i != b).Select(s => s.Name).ToList(),
+            Setpoints = plan, NewSolvent = newSolvent.Name, NewSolventEntry = newSolvent, OldSolvents = solvents.Where((_, i) => i != b).Select(s => s.Name).ToList(),
             Target = target, Methods = methods, Recommended = recommended, Reason = reason,
             Volumes = (minimum * 1e3, maximum * 1e3), Held = held, Findings = findings, Model = system.Model,
         };
@@ -134,6 +134,7 @@ public static class SwapPlanner
             TimeS = double.IsNaN(last.TimeS) ? null : heatUpS + last.TimeS,
             Refills = run.Method == SwapMethod.PutAndTake ? last.Cycle : 0,
             FinalVolumeL = Litres(last.Moles), Steps = steps,
+            TwoLiquidsAt = run.Points.FirstOrDefault(pt => pt.Boil.TwoLiquids) is { } split ? split.NewSolventMol * p.MolarVolumeM3[p.NewSolvent] * 1e3 : null,
         };
     }
 
@@ -183,6 +184,8 @@ public static class SwapPlanner
         // The old solvents leaving slower than the new one near the end: the swap works by dilution alone.
         foreach (var m in methods)
         {
+            if (m.TwoLiquidsAt is double litres)
+                found.Add(Make("swap", Severity.Caution, "two-liquids", ["to"], W("method", m.Name), N("added", litres, "L"), W("solvent", names[b])));
             var end = m.Steps[^1];
             double[] x = names.Select(n => end.Liquid[n]).ToArray();
             var y = system.BubblePressure(end.Vapor.Kelvin, x).Vapor;

@@ -40,7 +40,7 @@ public static class SwapReport
             Notes = p.Notes.Where(n => n.Code != "pressure-ramp").ToList(),
             Assumptions = p.Assumptions,
             Sources = PlanReports.SourcesOf(p, context),
-            Cautions = Checks.Cautions.General,
+            Cautions = Checks.Cautions.For(p.Equipment, [.. p.System.Components, .. s.NewSolventEntry is { } n ? new[] { n } : []]),
             Plots = [ResidualPlot(s)],
         };
     }

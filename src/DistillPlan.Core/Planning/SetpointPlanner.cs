@@ -200,6 +200,7 @@ public static partial class SetpointPlanner
     private static Plan WithPureTime(Plan plan)
     {
         if (plan.Scale is not PlanScale scale) return plan;
+        if (plan.System is MixtureBoilingSystem) return WithAtmosphericStripTime(plan, scale);
         bool peroxide = plan.System.Components.Any(s => s.PeroxideClass != Library.PeroxideClass.None);
         double left = peroxide ? StripPlanner.PeroxideMinimumResidue : StripPlanner.DefaultFractionLeft;
         double t = ScalePlanner.PureEvaporationTimeS(scale.Setup, plan.System, plan.StartVapor, plan.Vapor, plan.Bath, plan.VacuumSetpoint, plan.Equipment.Coolant, left);
@@ -208,6 +209,20 @@ public static partial class SetpointPlanner
         double evaporatedMol = (1 - left) * scale.Setup.ChargeM3 / plan.System.Components[0].MolarVolumeM3PerMol!.Value;
         double energy = scale.HeatUp.EnergyJ + evaporatedMol * scale.Start.LatentHeatJPerMol;
         return plan with { Scale = scale with { EvaporationTimeS = t, EndText = end, EnergyJ = energy } };
+    }
+
+    /// <summary>
+    /// A mixture that boils at ambient pressure: the time is that of a strip held at the local
+    /// atmosphere, its boiling temperature rising as the light component leaves.
+    /// </summary>
+    private static Plan WithAtmosphericStripTime(Plan plan, PlanScale scale)
+    {
+        StripPlan strip;
+        try { strip = StripPlanner.Plan(plan, new StripRequest(plan.Equipment.Atmosphere, StripEnd.Default)); }
+        catch (DistillPlanException) { return plan; }
+        if (strip.TotalTimeS is not double end) return plan;
+        double heatUp = scale.HeatUp.NotEvaluatedReason is null ? scale.HeatUp.TimeS : 0;
+        return plan with { Scale = scale with { EvaporationTimeS = end - heatUp, EndText = strip.EndText(Reports.DisplayFormat.Default) } };
     }
 
     /// <summary>fill-level: a flask over half full, or a vessel charged below its minimum stirred volume.</summary>

@@ -15,7 +15,11 @@ namespace DistillPlan.Core.Planning;
 /// <param name="TimeS">Time so far [s] (heat-up included), or null without a rate.</param>
 /// <param name="Cycle">Put-and-take: refills so far; constant-volume: 0 in the first strip, 1 while feeding.</param>
 public sealed record SwapStepPlan(IReadOnlyDictionary<string, double> Liquid, Temperature Vapor, Pressure Pressure, double VolumeL,
-    double NewSolventL, double DistillateL, double ResidualMassFraction, double? TimeS, int Cycle);
+    double NewSolventL, double DistillateL, double ResidualMassFraction, double? TimeS, int Cycle)
+{
+    /// <summary>The heat and gas balance here (duty, rate, condenser and pump load).</summary>
+    public HeatState? Heat { get; init; }
+}
 
 /// <summary>One method of a planned swap, with its totals.</summary>
 public sealed record SwapMethodPlan

@@ -102,6 +102,16 @@ public static class SwapPlanner
         double heatUp = scale.HeatUp.NotEvaluatedReason is null ? scale.HeatUp.TimeS : 0;
         var methods = (method is SwapMethod only ? [only] : new[] { SwapMethod.ConstantVolume, SwapMethod.PutAndTake })
             .Select(m => Describe(SolventSwap.Run(problem, m), problem, solvents, MassResidual, MoleResidual, heatUp)).ToList();
+        // Each reported step with its heat and gas balance, for the condenser and the pump.
+        methods = methods.Select(m => m with
+        {
+            Steps = m.Steps.Select(st =>
+            {
+                var x = solvents.Select(s => st.Liquid[s.Name]).ToArray();
+                var y = system.BubblePressure(st.Vapor.Kelvin, x).Vapor;
+                return st with { Heat = HeatBalance.At(sizing, system, y, st.VolumeL / 1e3, st.Vapor, BathFor(st.Vapor.Kelvin), st.Pressure, equipment.Coolant) };
+            }).ToList(),
+        }).ToList();
         var (recommended, reason) = Recommend(methods, newSolvent.Name);
 
         var findings = Checks(plan, sizing, system, solvents, methods, b, hottest);

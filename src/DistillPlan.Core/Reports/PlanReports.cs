@@ -126,7 +126,9 @@ public static class PlanReports
             new($"Evaporated by {s.Basis}", QuantityKind.Percent, "evaporated_fraction") { ShortHeader = "Evap." },
             new("Pressure", QuantityKind.Pressure, "pressure") { ShortHeader = "P" },
             new("Vapour temperature", QuantityKind.Temperature, "vapor_temperature") { ShortHeader = "Vapour" },
-            new("Bath temperature", QuantityKind.Temperature, "bath_temperature") { ShortHeader = "Bath" },
+            s.Setpoints.Equipment.Heating == HeatingMedium.Jacket || s.Setpoints.Equipment.IsVessel
+                ? new("Jacket temperature", QuantityKind.Temperature, "bath_temperature") { ShortHeader = "Jacket" }
+                : new("Bath temperature", QuantityKind.Temperature, "bath_temperature") { ShortHeader = "Bath" },
         };
         columns.AddRange(names.Select(n => new Column($"x {n}", QuantityKind.MoleFraction, "liquid", n) { ShortHeader = "x " + Short(n), MachineOnly = !mixture }));
         columns.AddRange(names.Select(n => new Column($"y {n}", QuantityKind.MoleFraction, "vapor", n) { ShortHeader = "y " + Short(n), MachineOnly = true }));

@@ -80,8 +80,11 @@ internal static class ScaleRows
 
     /// <summary>The strip table's size columns: time for people, the rest for machines.</summary>
     public static IReadOnlyList<Column> StepColumns() =>
+        [new("Time", QuantityKind.Number, "time_min") { NumberUnit = "min", ShortHeader = "Time" }, .. MachineColumns()];
+
+    /// <summary>The contract's per-state fields as machine-only table columns.</summary>
+    public static IReadOnlyList<Column> MachineColumns() =>
     [
-        new("Time", QuantityKind.Number, "time_min") { NumberUnit = "min", ShortHeader = "Time" },
         new("Heat duty", QuantityKind.Number, "heat_duty_w") { NumberUnit = "W", MachineOnly = true },
         new("Evaporation", QuantityKind.Number, "evaporation_rate_g_per_h") { NumberUnit = "g/h", MachineOnly = true },
         new("Evaporation", QuantityKind.Number, "evaporation_rate_ml_per_h") { NumberUnit = "mL/h", MachineOnly = true },
@@ -94,10 +97,14 @@ internal static class ScaleRows
     /// <summary>The cells of <see cref="StepColumns"/> for one step.</summary>
     public static IReadOnlyList<Quantity> StepCells(StripStepPlan st)
     {
-        var h = st.Heat!;
+        return [Quantity.Number(Math.Round((st.TimeS ?? double.NaN) / 60, 1), "min"), .. MachineCells(st.Heat!)];
+    }
+
+    /// <summary>The cells of <see cref="MachineColumns"/> for one state.</summary>
+    public static IReadOnlyList<Quantity> MachineCells(HeatState h)
+    {
         return
         [
-            Quantity.Number(Math.Round((st.TimeS ?? double.NaN) / 60, 1), "min"),
             Quantity.Number(h.HeatDutyW, "W"), Quantity.Number(h.EvaporationGPerH, "g/h"), Quantity.Number(h.EvaporationMLPerH, "mL/h"),
             Quantity.Number(h.CondenserCapacityW, "W"), Quantity.Number(h.GasLoadM3PerS * 3600, "m³/h"),
             Quantity.Number(h.PumpSpeedM3PerS * 3600, "m³/h"), Quantity.Number(h.SolventToPumpGPerH, "g/h"),

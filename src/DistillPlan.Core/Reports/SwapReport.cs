@@ -49,7 +49,7 @@ public static class SwapReport
     {
         string words = m.Method == Scale.SwapMethod.ConstantVolume
             ? $"strip to {Num(s.Volumes.MinimumL)} L, then feed {s.NewSolvent} as fast as distillate leaves"
-            : $"strip to {Num(s.Volumes.MinimumL)} L, refill to {Num(s.Volumes.MaximumL)} L with {s.NewSolvent}, repeat ({m.Refills} refills)";
+            : $"strip to {Num(s.Volumes.MinimumL)} L, refill to {Num(s.Volumes.MaximumL)} L with {s.NewSolvent}, repeat ({m.Refills} {(m.Refills == 1 ? "refill" : "refills")})";
         var rows = new List<Row>
         {
             new("Method", Quantity.Words(m.Name), "method") { Note = words },
@@ -81,12 +81,15 @@ public static class SwapReport
             new("Old solvent by mass", QuantityKind.Percent, "residual_mass") { ShortHeader = "Old" },
         };
         columns.AddRange(names.Select(n => new Column($"x {n}", QuantityKind.MoleFraction, "liquid", n) { MachineOnly = true }));
+        bool balanced = m.Steps.All(st => st.Heat is not null);
+        if (balanced) columns.AddRange(ScaleRows.MachineColumns());
         var table = new Table("steps", columns, m.Steps.Select(st => new TableRow(
         [
             Quantity.Number(st.TimeS is double ts ? Math.Round(ts / 60, 1) : double.NaN, "min"), Quantity.Number(st.Cycle),
             Quantity.Number(Figures(st.VolumeL), "L"), Quantity.Number(Figures(st.NewSolventL), "L"), Quantity.Number(Figures(st.DistillateL), "L"),
             Quantity.Of(st.Pressure), Quantity.Of(st.Vapor), Quantity.Percent(st.ResidualMassFraction),
             .. names.Select(n => Quantity.MoleFraction(st.Liquid.GetValueOrDefault(n))),
+            .. balanced ? ScaleRows.MachineCells(st.Heat!) : [],
         ], [])).ToList());
         return new Section(m.Method == Scale.SwapMethod.ConstantVolume ? "Constant volume" : "Put and take", rows, [table]) { JsonGroup = "methods" };
     }

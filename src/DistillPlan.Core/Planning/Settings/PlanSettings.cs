@@ -151,7 +151,7 @@ public static class PlanSettings
                 b.Equipment = b.Equipment with { Pump = kind, PumpUltimate = Equipment.TypicalUltimate(kind) };
             },
             Value = b => Quantity.Words(Equipment.Word(b.Equipment.Pump)),
-            DefaultBasis = _ => "a chemistry diaphragm pump, " + CommonPractice,
+            DefaultBasis = b => (b.Equipment.IsVessel ? "a plant vessel's liquid-ring pump, " : "a chemistry diaphragm pump, ") + CommonPractice,
         },
         new()
         {
@@ -184,11 +184,19 @@ public static class PlanSettings
             Help = "Jacketed vessel by working volume (250L, 1.6m3): a stirred vessel with a jacket; sets the jacket as heating medium.",
             Apply = (b, v) =>
             {
+                if (b.Given.Contains("flask")) throw new InputException("--vessel", v, "either --flask or --vessel, not both");
                 double m3 = ScaleUnits.VolumeM3(v, "--vessel", 100);
                 // A vessel is heated through its jacket unless the user said otherwise (the heating setting is read before).
                 var heating = b.Given.Contains("heating") ? b.Equipment.Heating : HeatingMedium.Jacket;
                 var max = b.Given.Contains("heating") || b.Given.Contains("bath-max") ? b.Equipment.HeatingMax : Equipment.TypicalLimit(heating);
                 b.Equipment = b.Equipment with { Apparatus = ApparatusKind.JacketedVessel, NominalVolumeM3 = m3, Heating = heating, HeatingMax = max };
+                // A plant vessel is pumped by a liquid-ring pump unless the user said otherwise (common practice).
+                if (!b.Given.Contains("pump"))
+                    b.Equipment = b.Equipment with
+                    {
+                        Pump = PumpKind.LiquidRing,
+                        PumpUltimate = b.Given.Contains("pump-limit") ? b.Equipment.PumpUltimate : Equipment.TypicalUltimate(PumpKind.LiquidRing),
+                    };
             },
             Value = b => b.Equipment.IsVessel && b.Equipment.NominalVolumeM3 is double m3 ? Quantity.Number(m3 * 1e3, "L") : null,
         },
@@ -377,7 +385,7 @@ public static class PlanSettings
             try { s.Apply(b, text); }
             catch (InputException e) when (b.FromUnit.Contains(s.Key) && !lenient)
             {
-                throw new InputException(e.Field, e.Value, e.Allowed, $"{unit!.Origin}: {s.Key}: {e.Message}");
+                throw new InputException(e.Field, e.Value, e.Allowed, $"{unit!.Origin}: {e.Message}");
             }
             catch (DistillPlanException) when (lenient) { }
         }

@@ -83,8 +83,14 @@ public class PlanBenchmarks
     [Benchmark]
     public StripPlan Strip() => PlanWithRamp(StripCharge, reportEvery: 0.05);
 
-    // A swap benchmark (changing one component of a charge for another) waits for the swap
-    // feature, which does not exist yet.
+    /// <summary>`distillplan swap thf=150L --to toluene --target 1% --vessel 250L`: both methods compared.</summary>
+    [Benchmark]
+    public SwapPlan Swap()
+    {
+        var setup = PlanInputs.Of(("vessel", "250L")).Build();
+        var charge = ChargeParser.Parse("thf=150L", setup.Basis, _library);
+        return SwapPlanner.Plan(charge, _library.Find("toluene"), setup, SwapTarget.Parse("1%"));
+    }
 }
 
 /// <summary>Reading and validating the shipped solvents.yaml (every command does it once).</summary>

@@ -17,12 +17,13 @@ internal static class ScaleRows
         var h = s.Start;
         var rows = new List<Row>
         {
-            new("Heat duty", Power(h.HeatDutyW))
+            // Plant people read duties in kW; a bench evaporator's in W.
+            new("Heat duty", s.Setup.Vessel ? Quantity.Number(h.HeatDutyW / 1000, "kW") : Power(h.HeatDutyW))
             {
                 Note = $"U·A·ΔT: {Num(s.Setup.UWPerM2K)} W/(m² K) × {Sig(h.AreaM2)} m² wetted × {Num(p.Bath.Kelvin - p.Vapor.Kelvin)} K",
             },
             new("Evaporation rate", MassRate(h.EvaporationGPerH)) { Note = VolumeRate(h.EvaporationMLPerH) + $" at the start; ΔHvap {Num(h.LatentHeatJPerMol / 1000)} kJ/mol" },
-            new("Condenser load", Quantity.Percent(h.CondenserShare)) { Note = PowerPair(h.HeatDutyW, h.CondenserCapacityW) + " it can take" },
+            new("Condenser load", Quantity.Percent(h.CondenserShare)) { Note = PowerPair(h.HeatDutyW, h.CondenserCapacityW, s.Setup.Vessel) + " it can take" },
         };
         // At atmospheric pressure no pump runs: what passes the condenser leaves by the vent.
         if (!p.AtAtmosphericPressure)
@@ -127,7 +128,7 @@ internal static class ScaleRows
     }
 
     // Two powers in one unit, the larger deciding: "7.3 kW of 24.4 kW".
-    private static string PowerPair(double a, double b) => Math.Max(a, b) >= 10000
+    private static string PowerPair(double a, double b, bool kilowatts) => kilowatts || Math.Max(a, b) >= 10000
         ? $"{Num(a / 1000)} kW of {Num(b / 1000)} kW" : $"{Num(a)} W of {Num(b)} W";
 
     private static Quantity Power(double w) => w >= 10000 ? Quantity.Number(w / 1000, "kW") : Quantity.Number(w, "W");

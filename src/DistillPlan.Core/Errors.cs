@@ -59,7 +59,7 @@ public sealed class NoConvergenceException(string method, string detail)
 
 /// <summary>A library file that cannot be read: names the file, line and field.</summary>
 public sealed class LibraryFormatException(string file, int line, string field, string problem)
-    : DistillPlanException($"{file}:{line}: {field}: {problem}")
+    : DistillPlanException(line > 0 ? $"{file}:{line}: {field}: {problem}" : $"{file}: {field}: {problem}")
 {
     /// <summary>Path of the YAML file.</summary>
     public string File { get; } = file;

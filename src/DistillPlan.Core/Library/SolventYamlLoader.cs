@@ -235,7 +235,9 @@ public static class SolventYamlLoader
             PeroxideClass = peroxide,
             Flags = flags,
             UnifacGroups = groups,
-            VaporPressure = new VaporPressureModel(name, curves, tc, pc),
+            // Without a published Tc: Watson's Tc of an estimated curve, else Guldberg's rule Tc ≈ 1.5 Tb (common practice).
+            VaporPressure = new VaporPressureModel(name, curves, tc, pc,
+                curves.OfType<ClausiusClapeyron>().Select(c => c.WatsonTcK).Max() ?? Math.Max(1.5 * tb, curves.Max(c => c.TMaxK))),
             EnthalpyOfVaporization = dh,
             Sources = fieldSources,
             Origin = $"{e.File}:{e.Line}",

@@ -79,7 +79,7 @@ internal sealed class YamlCursor(YamlNode node, string path, string file)
 
     // A key must be a plain name; YAML also allows a list or a mapping as a key, which no format here uses.
     private string KeyText(YamlNode key) => key is YamlScalarNode s
-        ? s.Value ?? ""
+        ? (string.IsNullOrEmpty(s.Value) ? "(empty key)" : s.Value)
         : throw new LibraryFormatException(File, (int)key.Start.Line, Path.Length == 0 ? "(top level)" : Path,
             $"a key must be a plain name, not a {(key is YamlSequenceNode ? "list" : "mapping")}");
 

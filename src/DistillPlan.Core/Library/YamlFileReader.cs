@@ -66,6 +66,11 @@ internal static class YamlFileReader
         var stream = new YamlStream();
         try { stream.Load(new StringReader(text)); }
         catch (YamlException e) { throw Syntax(e, text, problem); }
+        // The tree loader rejects some event sequences the parser accepts (odd tags, keys) with these.
+        catch (Exception e) when (e is InvalidOperationException or ArgumentException)
+        {
+            throw problem(1, "yaml", "not valid YAML for this format (" + e.Message.Split('\n')[0] + ")");
+        }
         return stream.Documents.Count == 0 ? null : stream.Documents[0].RootNode;
     }
 
@@ -114,6 +119,10 @@ internal static class YamlFileReader
             }
         }
         catch (YamlException e) { throw Syntax(e, text, problem); }
+        catch (Exception e) when (e is InvalidOperationException or ArgumentException)
+        {
+            throw problem(1, "yaml", "not valid YAML for this format (" + e.Message.Split('\n')[0] + ")");
+        }
     }
 
     private static Exception Syntax(YamlException e, string text, YamlProblem problem)

@@ -86,7 +86,7 @@ public static class PlanFileReader
         var result = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
         foreach (var (k, v) in node.Children)
         {
-            string key = k is YamlScalarNode ks ? ks.Value ?? ""
+            string key = k is YamlScalarNode ks ? (string.IsNullOrEmpty(ks.Value) ? "(empty key)" : ks.Value)
                 : throw new PlanFileException(file, Line(k), $"a key must be a plain name, not a {(k is YamlSequenceNode ? "list" : "mapping")}; expected one of {string.Join(", ", allowed)}");
             if (!allowed.Contains(key))
                 throw new PlanFileException(file, Line(k), $"unknown key '{key}'; expected one of {string.Join(", ", allowed)}");

@@ -116,8 +116,12 @@ public sealed class VaporPressureModel
         if (SegmentCurve(temperatureK) is { } curve)
             return new PsatResult(Math.Exp(ExtendedLnP(curve, temperatureK)), temperatureK, curve, !Curves.Any(c => c.Covers(temperatureK)));
 
-        // Outside every range: extend the nearest edge along ln P = a − b/T.
-        var nearest = Curves.MinBy(c => DistanceOutside(c, temperatureK))!;
+        // Outside every range: extend along ln P = a − b/T the curve that answers at that edge of
+        // the segments, so P(T) stays continuous and rising across the edge (extending another
+        // curve that merely reaches a little further made cyclohexane's P drop by 1 % at 279.69 K).
+        var nearest = _segments.Count > 0
+            ? (temperatureK < _segments[0].LoK ? _segments[0].Curve : _segments[^1].Curve)
+            : Curves.MinBy(c => DistanceOutside(c, temperatureK))!;
         return new PsatResult(Math.Exp(ExtendedLnP(nearest, temperatureK)), temperatureK, nearest, true);
     }
 
@@ -145,7 +149,7 @@ public sealed class VaporPressureModel
         double f(double t) => Math.Log(SaturationPressure(t).PressurePa) - target;
         double lo = Math.Max(1.0, MinK * 0.3);
         double hi = CriticalTemperatureK ?? EstimatedCriticalTemperatureK ?? MaxK * 1.5;
-        if (!(f(lo) < 0 && f(hi) > 0))
+        if (!(f(lo) < 0 && f(hi) >= 0))
             throw new OutOfRangeException(Substance, "saturation temperature",
                 $"no boiling temperature found for {pressurePa / 100:G4} mbar between {lo:F0} K and {hi:F0} K");
         double root = MathNet.Numerics.RootFinding.Brent.FindRoot(f, lo, hi, 1e-10, 200);

@@ -60,6 +60,23 @@ public class ChargeAndNumberProperties
     }
 
     [Fact]
+    public void Every_library_name_as_the_text_UI_inserts_it_reads_back_as_that_solvent_alone_and_in_a_mixture()
+    {
+        // The find list inserts ChargeParser.NameFor; 1,4-dioxane and N,N-dimethylformamide hold commas.
+        var library = ShippedLibrary.Instance;
+        foreach (var s in library.Solvents)
+        {
+            string name = ChargeParser.NameFor(s);
+            Assert.Same(s, Assert.Single(ChargeParser.Parse(name, Basis.Mole, library).Components).Solvent);
+            var other = ReferenceEquals(s, library.Find("water")) ? library.Find("ethanol") : library.Find("water");
+            var mix = ChargeParser.Parse($"{ChargeParser.NameFor(other)}=1,{name}=1", Basis.Mole, library);
+            Assert.Equal([other, s], mix.Components.Select(c => c.Solvent));
+            var quoted = ChargeParser.Parse($"\"{s.Name}\"=1,{ChargeParser.NameFor(other)}=1", Basis.Mole, library);
+            Assert.Equal([s, other], quoted.Components.Select(c => c.Solvent));
+        }
+    }
+
+    [Fact]
     public void Any_pressure_text_is_a_finite_pressure_in_range_or_one_clean_line()
     {
         var atmosphere = Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa);

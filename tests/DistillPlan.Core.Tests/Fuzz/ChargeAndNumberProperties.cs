@@ -76,6 +76,20 @@ public class ChargeAndNumberProperties
         }
     }
 
+    [Theory]
+    [InlineData(double.NaN)]
+    [InlineData(double.PositiveInfinity)]
+    [InlineData(0.0)]
+    [InlineData(-1.0)]
+    public void Core_refuses_an_amount_that_is_not_finite_and_positive_and_names_the_solvent(double moles)
+    {
+        var ethanol = ShippedLibrary.Instance.Find("ethanol");
+        var e = Assert.Throws<InputException>(() => new ChargeComponent(ethanol, moles));
+        Assert.Equal("charge (ethanol)", e.Field);
+        Assert.Throws<InputException>(() => new Product(moles, 100, null));
+        Assert.Throws<InputException>(() => new Product(1, moles, null));
+    }
+
     [Fact]
     public void Any_pressure_text_is_a_finite_pressure_in_range_or_one_clean_line()
     {

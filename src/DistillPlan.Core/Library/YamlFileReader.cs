@@ -36,7 +36,7 @@ internal static class YamlFileReader
         if (!File.Exists(path)) throw problem(0, "file", "does not exist");
         // Opening a FIFO blocks until a writer comes and a device never ends: ask stat(2) first.
         if (!FileKind.IsRegularFile(path))
-            throw problem(0, "file", "is not a regular file (a device, a pipe or another special file); give a YAML text file");
+            throw problem(0, "file", "is not a regular file (a device, a pipe or another special file); give a text file");
         byte[] bytes;
         try
         {

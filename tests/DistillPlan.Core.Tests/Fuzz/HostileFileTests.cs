@@ -131,6 +131,9 @@ public sealed class HostileFileTests : IDisposable
             var plan = Assert.Throws<PlanFileException>(() => PlanFileReader.Load(path));
             Clean.AssertOneLineNamingAField(plan.Message, path);
             Assert.ThrowsAny<DistillPlanException>(() => EquipmentFile.Load(path));
+            var csv = Assert.Throws<InputException>(() => DistillPlan.Core.Fitting.MeasuredPoints.ReadCsv(path, "--data",
+                DistillPlan.Core.Quantities.Pressure.FromPascal(PhysicalConstants.StandardAtmospherePa)));
+            Clean.AssertOneLineNamingAField(csv.Message, path);
         }
     }
 

@@ -142,6 +142,27 @@ public class ChargeAndNumberProperties
     }
 
     [Fact]
+    public void A_plan_of_any_binary_mixture_is_finite_or_refused_cleanly()
+    {
+        var library = ShippedLibrary.Instance;
+        var names = library.Solvents.Select(s => ChargeParser.NameFor(s)).ToArray();
+        var parts = new[] { "1", "50", "99", "0.001", "1000", "1e-6" };
+        Gen.Select(Gen.Int[0, names.Length - 1], Gen.Int[0, names.Length - 1], Gen.OneOf(parts.Select(Gen.Const).ToArray()), Gen.OneOf(parts.Select(Gen.Const).ToArray()))
+            .Where((a, b, _, _) => a != b).Sample((a, b, pa, pb) =>
+        {
+            string text = $"{names[a]}={pa},{names[b]}={pb}";
+            Clean.Run(text, () =>
+            {
+                var setup = new PlanInputs().Build();
+                var charge = ChargeParser.Parse(text, setup.Basis, library);
+                var plan = SetpointPlanner.Plan(charge, BoilingSystems.For(charge, setup.Model), setup);
+                Assert.True(double.IsFinite(plan.VacuumSetpoint.Pascal) && plan.VacuumSetpoint.Pascal > 0, $"{text}: setpoint {plan.VacuumSetpoint.Pascal} Pa");
+                Assert.True(double.IsFinite(plan.Vapor.Kelvin) && double.IsFinite(plan.Bath.Kelvin), $"{text}: vapour {plan.Vapor.Kelvin} K, bath {plan.Bath.Kelvin} K");
+            });
+        }, iter: 60, threads: 1);
+    }
+
+    [Fact]
     public void Vapour_pressure_rises_with_temperature_also_beyond_the_ranges()
     {
         // Found by this property: cyclohexane's P fell by 1 % at 279.69 K, where the extension below

@@ -1,7 +1,18 @@
 namespace DistillPlan.Core;
 
 /// <summary>Base of the small exception family the core throws; the CLI and TUI catch it.</summary>
-public abstract class DistillPlanException(string message, Exception? inner = null) : Exception(message, inner);
+public abstract class DistillPlanException(string message, Exception? inner = null) : Exception(OneLine(message), inner)
+{
+    /// <summary>Most characters a message keeps: a value quoted from a file may be megabytes long.</summary>
+    public const int MaxMessageLength = 400;
+
+    // Every message is printed as one line on stderr: values quoted in it may hold line breaks or be huge.
+    private static string OneLine(string message)
+    {
+        string line = message.ReplaceLineEndings(" ");
+        return line.Length <= MaxMessageLength ? line : $"{line[..(MaxMessageLength - 60)]}… (message of {line.Length} characters cut)";
+    }
+}
 
 /// <summary>
 /// Input the user gave that cannot be used. The message names the field, the value and what
@@ -59,7 +70,7 @@ public sealed class NoConvergenceException(string method, string detail)
 
 /// <summary>A library file that cannot be read: names the file, line and field.</summary>
 public sealed class LibraryFormatException(string file, int line, string field, string problem)
-    : DistillPlanException($"{file}:{line}: {field}: {problem}")
+    : DistillPlanException(line > 0 ? $"{file}:{line}: {field}: {problem}" : $"{file}: {field}: {problem}")
 {
     /// <summary>Path of the YAML file.</summary>
     public string File { get; } = file;

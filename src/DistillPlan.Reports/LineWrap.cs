@@ -27,21 +27,23 @@ public static partial class LineWrap
             int start = lead;
             foreach (Match m in Token().Matches(raw.TrimStart(' ')))
             {
-                string token = m.Value, word = token.TrimEnd();
-                while (word.Length > 0)
+                // The rest of the word starts at pos: cutting a long word moves an index, never
+                // copies what is left, so a megabyte without spaces wraps in linear time.
+                string token = m.Value;
+                int wordLength = token.TrimEnd().Length, pos = 0;
+                while (pos < wordLength)
                 {
-                    if (line.Length + word.Length <= width)
+                    if (line.Length + wordLength - pos <= width)
                     {
-                        line.Append(token);
+                        line.Append(token, pos, token.Length - pos);
                         break;
                     }
                     if (line.Length == start)
                     {
                         // A word wider than the whole line is cut.
                         int room = width - line.Length;
-                        line.Append(word[..room]);
-                        word = word[room..];
-                        token = word + token[(token.TrimEnd().Length)..];
+                        line.Append(token, pos, room);
+                        pos += room;
                     }
                     yield return line.ToString().TrimEnd();
                     line.Clear().Append(' ', indent);

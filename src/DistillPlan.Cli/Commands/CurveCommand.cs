@@ -64,6 +64,11 @@ internal static class CurveCommand
                 var t = TemperatureUnits.Parse(tempText, "--temp");
                 var p = solvent.VaporPressure.SaturationPressure(t.Kelvin);
                 bool frozen = solvent.MeltingPointK is double tm && t.Kelvin < tm;
+                // So far below the curves the pressure underflows to zero: say so for the option typed, not as a "pressure" error.
+                if (!(p.PressurePa > 0))
+                    throw new InputException("--temp", tempText, frozen
+                        ? $"a temperature near or above the melting point of {solvent.Name}, {Temperature.FromKelvin(solvent.MeltingPointK!.Value)} (at {t} it is frozen and its vapour pressure is too small to state)"
+                        : $"a temperature at which {solvent.Name} has a vapour pressure to state (the curves cover {Temperature.FromKelvin(solvent.VaporPressure.MinK)} and up)");
                 if (json)
                     J.Write(o, J.Obj(("solvent", solvent.Name), ("vapor_pressure_mbar", J.N(p.PressurePa / 100, 5)), ("temperature_c", J.N(t.Celsius)),
                         ("source", library.Cite(p.Curve.Source)), ("source_key", p.Curve.Source), ("form", p.Curve.Form),

@@ -44,6 +44,7 @@ internal static class MixtureCommand
             else
             {
                 var p = AtOrStandard(r.GetValue(at));
+                PotFreezing.RequireLiquidAt(system.Components, p.Pascal, "--at", r.GetValue(at) ?? "");
                 bubble = system.Equilibrium.BubbleTemperature(p.Pascal, x);
                 dew = system.Equilibrium.DewTemperature(p.Pascal, x);
             }
@@ -139,6 +140,7 @@ internal static class AzeotropeCommand
             Solvent a = library.Find(r.GetValue(first)!), b = library.Find(r.GetValue(second)!);
             if (ReferenceEquals(a, b)) throw new InputException("second", r.GetValue(second)!, "a solvent other than the first");
             var p = MixtureCommand.AtOrStandard(r.GetValue(at));
+            PotFreezing.RequireLiquidAt([a, b], p.Pascal, "--at", r.GetValue(at) ?? "");
             var kind = BoilingSystems.ParseModel(model.Read(r).Build().Model);
             var result = AzeotropeSearch.Find(MixtureComponent.FromSolvent(a), MixtureComponent.FromSolvent(b), p.Pascal, kind);
             var az = result.Azeotropes.FirstOrDefault();

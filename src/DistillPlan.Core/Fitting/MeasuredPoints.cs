@@ -1,4 +1,5 @@
 using System.Globalization;
+using DistillPlan.Core.Library;
 using DistillPlan.Core.Quantities;
 
 namespace DistillPlan.Core.Fitting;
@@ -57,19 +58,23 @@ public static class MeasuredPoints
     private static (double TK, double PPa) Point(string t, string p, string field, Pressure atmosphere) =>
         (TemperatureUnits.Parse(t.Trim(), field).Kelvin, PressureUnits.Parse(p.Trim(), field, atmosphere).Pascal);
 
+    /// <summary>Largest CSV file of measured points read (thousands of points fit in far less).</summary>
+    public const long MaxCsvBytes = 1 << 20;
+
     /// <summary>Reads the points of a CSV file (see the class summary for the header rule).</summary>
     /// <param name="path">The file.</param>
     /// <param name="field">Option or field name for messages.</param>
     /// <param name="atmosphere">Local atmosphere, for gauge readings.</param>
     public static IReadOnlyList<(double TK, double PPa)> ReadCsv(string path, string field, Pressure atmosphere)
     {
-        string[] lines;
-        try { lines = File.ReadAllLines(path); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
+        string text;
+        // The same guarded read as every file a user names: a FIFO or /dev/zero must not hang or fill memory.
+        try { text = YamlFileReader.ReadText(path, MaxCsvBytes, (_, _, problem) => new InputException(field, path, "a readable CSV file", $"{field}: '{InputException.Shorten(path)}' {problem}")); }
+        catch (ArgumentException e)
         {
-            throw new InputException(field, path, "a readable CSV file", $"{field}: cannot read '{path}': {e.Message}");
+            throw new InputException(field, path, "a readable CSV file", $"{field}: cannot read '{InputException.Shorten(path)}': {e.Message}");
         }
-        return ParseCsv(lines, path, field, atmosphere);
+        return ParseCsv(text.ReplaceLineEndings("\n").TrimEnd('\n').Split('\n'), path, field, atmosphere);
     }
 
     /// <summary>Reads the points of CSV text already split into lines; <paramref name="file"/> names it in messages.</summary>

@@ -47,7 +47,7 @@ public static class UserLibraryFile
         }
         else
         {
-            string old = File.ReadAllText(full);
+            string old = YamlFileReader.ReadText(full, SolventYamlLoader.MaxFileBytes, (line, f, problem) => new LibraryFormatException(full, line, f, problem));
             var mine = SolventYamlLoader.Parse(old, full, shipped.Citations);
             var clash = mine.Solvents.Select((s, i) => (s, i)).Where(t => Clashes(t.s, entry)).ToList();
             if (clash.Count > 0 && !replace)

@@ -24,11 +24,20 @@ public sealed class SolventLibrary
             {
                 string k = Normalise(key);
                 if (_byKey.TryGetValue(k, out var other) && !ReferenceEquals(other, s))
-                    throw new LibraryFormatException(s.Origin.Split(':')[0], int.TryParse(s.Origin.Split(':').Last(), out int l) ? l : 0,
-                        "aliases", $"'{key}' of {s.Name} is also a name of {other.Name} ({other.Origin})");
+                {
+                    // Blame the user's entry, not the shipped one it collides with: the user's file is what to edit.
+                    var (blamed, kept) = files.Count > 1 && OriginFile(s) == files[0] && OriginFile(other) != files[0] ? (other, s) : (s, other);
+                    string field = Normalise(blamed.Name) == k ? "name" : Normalise(blamed.Cas) == k ? "cas" : "aliases";
+                    throw new LibraryFormatException(OriginFile(blamed), OriginLine(blamed), field,
+                        $"'{key}' of {blamed.Name} is also a name, alias or CAS number of {kept.Name} ({kept.Origin}); " +
+                        "an entry replaces a shipped one only when its CAS number (or, without one, its name) is the same");
+                }
                 _byKey[k] = s;
             }
     }
+
+    private static string OriginFile(Solvent s) => s.Origin[..Math.Max(0, s.Origin.LastIndexOf(':'))];
+    private static int OriginLine(Solvent s) => int.TryParse(s.Origin[(s.Origin.LastIndexOf(':') + 1)..], out int l) ? l : 0;
 
     /// <summary>All solvents, shipped first, then the user's additions.</summary>
     public IReadOnlyList<Solvent> Solvents { get; }

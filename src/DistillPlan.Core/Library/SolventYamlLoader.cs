@@ -32,27 +32,20 @@ public static class SolventYamlLoader
     /// <param name="knownSources">Source keys defined elsewhere (the shipped file), usable by a user file.</param>
     public static LibraryFile Load(string path, IReadOnlyDictionary<string, string>? knownSources = null)
     {
-        string text;
-        try { text = System.IO.File.ReadAllText(path); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new LibraryFormatException(path, 0, "file", "cannot be read: " + e.Message);
-        }
+        string text = YamlFileReader.ReadText(path, MaxFileBytes, (line, field, problem) => new LibraryFormatException(path, line, field, problem));
         return Parse(text, path, knownSources);
     }
+
+    /// <summary>Largest library file read: the shipped one is about 100 kB.</summary>
+    public const long MaxFileBytes = 8 << 20;
 
     /// <summary>Parses library text; <paramref name="file"/> is used in messages.</summary>
     public static LibraryFile Parse(string text, string file, IReadOnlyDictionary<string, string>? knownSources = null)
     {
-        var stream = new YamlStream();
-        try { stream.Load(new StringReader(text)); }
-        catch (YamlException e)
-        {
-            throw new LibraryFormatException(file, (int)e.Start.Line, "yaml", "not valid YAML: " + e.Message.Split('\n')[0]);
-        }
-        if (stream.Documents.Count == 0) throw new LibraryFormatException(file, 1, "file", "the file is empty");
+        var rootNode = YamlFileReader.Parse(text, (line, field, problem) => new LibraryFormatException(file, line, field, problem))
+            ?? throw new LibraryFormatException(file, 1, "file", "the file is empty");
 
-        var root = new YamlCursor(stream.Documents[0].RootNode, "", file);
+        var root = new YamlCursor(rootNode, "", file);
         root.OnlyKeys("format", "sources", "solvents");
         string format = root.Required("format").String();
         if (format != FormatTag) throw root.Required("format").Error($"expected '{FormatTag}', got '{format}'");
@@ -62,8 +55,22 @@ public static class SolventYamlLoader
             foreach (var (key, value) in src.Entries()) sources[key] = value.String();
 
         var solvents = new List<Solvent>();
+        // Within one file every name, alias and CAS number belongs to one entry: two entries
+        // that share one would leave it to chance which a charge gets.
+        var owners = new Dictionary<string, (string Name, int Line)>(StringComparer.Ordinal);
         foreach (var item in root.Required("solvents").Items())
-            solvents.Add(ReadSolvent(item, sources));
+        {
+            var s = ReadSolvent(item, sources);
+            foreach (var (key, field) in new[] { (s.Name, "name"), (s.Cas, "cas") }.Concat(s.Aliases.Select(a => (a, "aliases"))))
+            {
+                if (key.Length == 0) continue;
+                string k = SolventLibrary.Normalise(key);
+                if (owners.TryGetValue(k, out var first) && first.Line != item.Line)
+                    throw (item.Optional(field) ?? item).Error($"'{key}' is already a name, alias or CAS number of '{first.Name}' (line {first.Line}) in this file; each entry needs its own");
+                owners[k] = (s.Name, item.Line);
+            }
+            solvents.Add(s);
+        }
         return new LibraryFile(sources, solvents);
     }
 
@@ -90,6 +97,9 @@ public static class SolventYamlLoader
             if (c is null) return null;
             c.OnlyKeys(["value", "source", .. extra]);
             double v = c.Required("value").Positive();
+            // A density is given at a temperature; it must be one a liquid can have.
+            if (c.Optional("at_k") is { } at && at.Number() is var k && !(k > 0 && k < MaxTemperatureK))
+                throw at.Error($"expected a temperature in kelvin above 0 and below {MaxTemperatureK} K, got {k.ToString(System.Globalization.CultureInfo.InvariantCulture)}");
             SourceOf(c, field);
             return v;
         }
@@ -149,7 +159,7 @@ public static class SolventYamlLoader
         if (tc is double t && !(tb < t)) throw e.Required("critical").Error($"critical temperature {t} K is not above the boiling point {tb} K");
 
         var curves = new List<IVaporPressureCurve>();
-        foreach (var c in e.Required("vapor_pressure").Items()) curves.Add(ReadCurve(c, SourceOf));
+        foreach (var c in e.Required("vapor_pressure").Items()) curves.Add(ReadCurve(c, SourceOf, tc));
         if (curves.Count == 0) throw e.Required("vapor_pressure").Error("at least one vapour-pressure curve is required");
 
         IEnthalpyOfVaporization? dh = null;
@@ -202,7 +212,7 @@ public static class SolventYamlLoader
             {
                 if (!int.TryParse(key, out int id) || id <= 0) throw value.Error($"'{key}' is not a UNIFAC subgroup id");
                 double n = value.Positive();
-                if (n != Math.Floor(n)) throw value.Error("a subgroup count must be a whole number");
+                if (n != Math.Floor(n) || n > MaxGroupCount) throw value.Error($"a subgroup count must be a whole number from 1 to {MaxGroupCount}");
                 groups[id] = (int)n;
             }
             SourceOf(u, "unifac");
@@ -229,7 +239,9 @@ public static class SolventYamlLoader
             PeroxideClass = peroxide,
             Flags = flags,
             UnifacGroups = groups,
-            VaporPressure = new VaporPressureModel(name, curves, tc, pc),
+            // Without a published Tc: Watson's Tc of an estimated curve, else Guldberg's rule Tc ≈ 1.5 Tb (common practice).
+            VaporPressure = new VaporPressureModel(name, curves, tc, pc,
+                curves.OfType<ClausiusClapeyron>().Select(c => c.WatsonTcK).Max() ?? Math.Max(1.5 * tb, curves.Max(c => c.TMaxK))),
             EnthalpyOfVaporization = dh,
             LiquidHeatCapacity = cp,
             LiquidDensityCurve = rhoCurve,
@@ -238,7 +250,16 @@ public static class SolventYamlLoader
         };
     }
 
-    private static IVaporPressureCurve ReadCurve(YamlCursor c, Func<YamlCursor, string, string> sourceOf)
+    /// <summary>Highest temperature a library file may name [K]; no solvent is liquid near it.</summary>
+    public const double MaxTemperatureK = 2000;
+
+    /// <summary>How far past the entry's critical temperature a curve's range may end (published tables differ).</summary>
+    public const double CriticalRangeTolerance = 0.05;
+
+    /// <summary>Largest count of one UNIFAC subgroup in a molecule.</summary>
+    public const int MaxGroupCount = 1000;
+
+    private static IVaporPressureCurve ReadCurve(YamlCursor c, Func<YamlCursor, string, string> sourceOf, double? entryTcK)
     {
         string form = c.Required("form").String();
         string[] common = ["form", "t_min_k", "t_max_k", "source", "estimate"];
@@ -309,11 +330,43 @@ public static class SolventYamlLoader
                 throw c.Required("form").Error($"'{form}' is not a curve form; allowed: antoine-log10, antoine-ln, dippr101, wagner-3-6, wagner-2.5-5, wagner-general, clausius-clapeyron");
         }
 
-        // A curve that is not finite, positive and rising over its own range is a copying error in the file.
-        double p1 = curve.PressurePa(tmin), p2 = curve.PressurePa(tmax);
-        if (!(double.IsFinite(p1) && double.IsFinite(p2) && p1 > 0 && p2 > p1))
-            throw c.Required("form").Error($"the curve does not give a rising positive pressure over {tmin}–{tmax} K (check the coefficients)");
+        CheckCurve(c, curve, entryTcK);
         return curve;
+    }
+
+    // A curve that is not finite, positive and rising over its whole range, or that runs past
+    // the critical point, is a copying error in the file: refuse it here, with its line, rather
+    // than answer nonsense (or fail without a line) when a plan reaches that temperature.
+    private static void CheckCurve(YamlCursor c, IVaporPressureCurve curve, double? entryTcK)
+    {
+        double tmin = curve.TMinK, tmax = curve.TMaxK;
+        string K(double v) => v.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture) + " K";
+        if (tmax > MaxTemperatureK) throw c.Required("t_max_k").Error($"{K(tmax)} is above {K(MaxTemperatureK)}; no solvent is liquid there");
+        if (curve is Wagner w && tmax > w.TcK)
+            throw c.Required("t_max_k").Error($"{K(tmax)} is above the curve's own critical temperature tc_k {K(w.TcK)}");
+        // A curve's published range may end a little past the entry's Tc from another table
+        // (DMSO: 729 K against 707 K); the model refuses above Tc anyway. Far past it is a typing error.
+        if (entryTcK is double tc && tmax > tc * (1 + CriticalRangeTolerance))
+            throw c.Required("t_max_k").Error($"{K(tmax)} is more than {CriticalRangeTolerance:P0} above the entry's critical temperature {K(tc)}; there is no vapour pressure there");
+        if (curve is Antoine a)
+        {
+            // log P = A − B/(T + C): T + C = 0 is a pole, with P jumping from 0 to infinity.
+            double poleK = (a.CelsiusScale ? PhysicalConstants.ZeroCelsiusK : 0) - a.C;
+            if (poleK >= tmin && poleK <= tmax)
+                throw c.Required("c").Error($"T + C is zero at {K(poleK)}, inside the range {K(tmin)}–{K(tmax)}: the equation has a pole there (check the sign of C and t_unit)");
+        }
+        const int samples = 64;
+        double previous = 0;
+        for (int i = 0; i <= samples; i++)
+        {
+            double t = tmin + (tmax - tmin) * i / samples;
+            double p;
+            try { p = curve.PressurePa(t); }
+            catch (DistillPlanException e) { throw c.Required("form").Error($"cannot be evaluated at {K(t)}: {e.Message}"); }
+            if (!(double.IsFinite(p) && p > 0 && p > previous))
+                throw c.Required("form").Error($"the curve does not give a positive pressure rising with temperature over {K(tmin)}–{K(tmax)} (at {K(t)}: {p.ToString("G4", System.Globalization.CultureInfo.InvariantCulture)} Pa; check the coefficients)");
+            previous = p;
+        }
     }
 
     // estimate: {basis: trouton|hvap, expected_error_percent: 10, source: key}

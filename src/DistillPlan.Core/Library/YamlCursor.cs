@@ -15,7 +15,7 @@ internal sealed class YamlCursor(YamlNode node, string path, string file)
     public string File { get; } = file;
     public int Line => (int)Node.Start.Line;
 
-    public LibraryFormatException Error(string problem) => new(File, Line, Path, problem);
+    public LibraryFormatException Error(string problem) => new(File, Line, Path.Length == 0 ? "(top level)" : Path, problem);
 
     private YamlMappingNode Mapping => Node as YamlMappingNode ?? throw Error("expected a mapping (key: value lines)");
 
@@ -24,14 +24,15 @@ internal sealed class YamlCursor(YamlNode node, string path, string file)
     public YamlCursor? Optional(string key) =>
         Mapping.Children.TryGetValue(new YamlScalarNode(key), out var child) ? new YamlCursor(child, Join(key), File) : null;
 
-    public YamlCursor Required(string key) => Optional(key) ?? throw Error($"required field '{key}' is missing");
+    public YamlCursor Required(string key) =>
+        Optional(key) ?? throw new LibraryFormatException(File, Line, Join(key), "required field is missing");
 
     /// <summary>Rejects keys outside the allowed set, so a misspelt field is not silently ignored.</summary>
     public void OnlyKeys(params string[] allowed)
     {
         foreach (var (k, v) in Mapping.Children)
         {
-            string key = ((YamlScalarNode)k).Value ?? "";
+            string key = KeyText(k);
             if (!allowed.Contains(key))
                 throw new LibraryFormatException(File, (int)k.Start.Line, Join(key),
                     $"unknown field; allowed here: {string.Join(", ", allowed)}");
@@ -49,7 +50,9 @@ internal sealed class YamlCursor(YamlNode node, string path, string file)
         if (Node is YamlScalarNode s && double.TryParse(s.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out double v)
             && double.IsFinite(v))
             return v;
-        throw Error($"expected a number, got '{(Node as YamlScalarNode)?.Value ?? Node.NodeType.ToString()}'");
+        throw Error(Node is YamlScalarNode sc
+            ? $"expected a number (finite), got '{InputException.Shorten(sc.Value ?? "")}'"
+            : $"expected a number, got a {(Node is YamlSequenceNode ? "list" : "mapping")}");
     }
 
     public double Positive()
@@ -69,10 +72,16 @@ internal sealed class YamlCursor(YamlNode node, string path, string file)
     {
         foreach (var (k, v) in Mapping.Children)
         {
-            string key = ((YamlScalarNode)k).Value ?? "";
+            string key = KeyText(k);
             yield return (key, new YamlCursor(v, Join(key), File));
         }
     }
+
+    // A key must be a plain name; YAML also allows a list or a mapping as a key, which no format here uses.
+    private string KeyText(YamlNode key) => key is YamlScalarNode s
+        ? (string.IsNullOrEmpty(s.Value) ? "(empty key)" : s.Value)
+        : throw new LibraryFormatException(File, (int)key.Start.Line, Path.Length == 0 ? "(top level)" : Path,
+            $"a key must be a plain name, not a {(key is YamlSequenceNode ? "list" : "mapping")}");
 
     private string Join(string key) => Path.Length == 0 ? key : Path + "." + key;
 }

@@ -1,3 +1,4 @@
+using DistillPlan.Core.Library;
 using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Core.Quantities;
 using YamlDotNet.Core;
@@ -19,22 +20,18 @@ public static class PlanFileReader
     /// <summary>Reads a plan file from disk.</summary>
     public static PlanDocument Load(string path)
     {
-        string text;
-        try { text = File.ReadAllText(path); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new PlanFileException(path, 0, "cannot be read: " + e.Message);
-        }
+        string text = YamlFileReader.ReadText(path, MaxFileBytes, (line, _, problem) => new PlanFileException(path, line, problem));
         return Parse(text, path);
     }
+
+    /// <summary>Largest plan file read: a plan with pages of notes is a few kB.</summary>
+    public const long MaxFileBytes = 1 << 20;
 
     /// <summary>Reads plan-file text; <paramref name="file"/> names it in messages.</summary>
     public static PlanDocument Parse(string text, string file)
     {
-        var stream = new YamlStream();
-        try { stream.Load(new StringReader(text)); }
-        catch (YamlException e) { throw new PlanFileException(file, (int)e.Start.Line, "not valid YAML: " + e.Message.Split('\n')[0]); }
-        if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode root)
+        var rootNode = YamlFileReader.Parse(text, (line, _, problem) => new PlanFileException(file, line, problem));
+        if (rootNode is not YamlMappingNode root)
             throw new PlanFileException(file, 1, $"expected a mapping that starts with 'format: {PlanDocument.FormatTag}'");
 
         var top = Map(root, file, ["format", "title", "notes", .. SettingSections, "display"]);
@@ -89,7 +86,8 @@ public static class PlanFileReader
         var result = new Dictionary<string, YamlNode>(StringComparer.Ordinal);
         foreach (var (k, v) in node.Children)
         {
-            string key = (k as YamlScalarNode)?.Value ?? "";
+            string key = k is YamlScalarNode ks ? (string.IsNullOrEmpty(ks.Value) ? "(empty key)" : ks.Value)
+                : throw new PlanFileException(file, Line(k), $"a key must be a plain name, not a {(k is YamlSequenceNode ? "list" : "mapping")}; expected one of {string.Join(", ", allowed)}");
             if (!allowed.Contains(key))
                 throw new PlanFileException(file, Line(k), $"unknown key '{key}'; expected one of {string.Join(", ", allowed)}");
             if (!result.TryAdd(key, v))

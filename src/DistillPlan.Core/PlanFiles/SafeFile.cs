@@ -29,6 +29,7 @@ public static class SafeFile
         if (folder is null || !Directory.Exists(folder)) throw new InputException(field, path, "a path in an existing folder");
         if (exists && !confirmOverwrite(full)) return SaveOutcome.Declined;
 
+        RemoveStaleTemporaries(folder, Path.GetFileName(full));
         string temp = Path.Combine(folder, $".{Path.GetFileName(full)}.{Guid.NewGuid():N}.tmp");
         try
         {
@@ -43,6 +44,34 @@ public static class SafeFile
         finally
         {
             if (File.Exists(temp)) File.Delete(temp);
+        }
+    }
+
+    /// <summary>A temporary file of ours this old is left from a save that was killed (a live save takes seconds).</summary>
+    public static readonly TimeSpan StaleAfter = TimeSpan.FromMinutes(10);
+
+    /// <summary>
+    /// Deletes what killed saves of this file left: hidden <c>.NAME.&lt;32 hex digits&gt;.tmp</c>
+    /// files older than <see cref="StaleAfter"/>. Only that exact pattern is touched, so no
+    /// file of the user's (or a save in progress elsewhere) is removed; failures are ignored.
+    /// </summary>
+    public static void RemoveStaleTemporaries(string folder, string fileName)
+    {
+        string prefix = "." + fileName + ".";
+        IEnumerable<string> candidates;
+        try { candidates = Directory.EnumerateFiles(folder, ".*.tmp").ToList(); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException) { return; }
+        foreach (string path in candidates)
+        {
+            string name = Path.GetFileName(path);
+            if (!name.StartsWith(prefix, StringComparison.Ordinal) || !name.EndsWith(".tmp", StringComparison.Ordinal)) continue;
+            string middle = name[prefix.Length..^4];
+            if (middle.Length != 32 || !middle.All(Uri.IsHexDigit)) continue;
+            try
+            {
+                if (DateTime.UtcNow - File.GetLastWriteTimeUtc(path) > StaleAfter) File.Delete(path);
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException) { }
         }
     }
 

@@ -16,7 +16,14 @@ public enum Basis
 /// <summary>One solvent of a charge and its amount [mol].</summary>
 /// <param name="Solvent">The library entry.</param>
 /// <param name="Moles">Amount [mol]; for a relative charge the amounts add to 1 mol.</param>
-public sealed record ChargeComponent(Solvent Solvent, double Moles);
+public sealed record ChargeComponent(Solvent Solvent, double Moles)
+{
+    /// <summary>Amount [mol]: finite and above zero, or the charge is refused naming the solvent (a NaN must not reach a solver).</summary>
+    public double Moles { get; init; } = double.IsFinite(Moles) && Moles > 0
+        ? Moles
+        : throw new InputException($"charge ({Solvent.Name})", Moles.ToString(System.Globalization.CultureInfo.InvariantCulture) + " mol",
+            "a finite amount above zero");
+}
 
 /// <summary>A non-volatile product dissolved in the charge.</summary>
 /// <param name="MassG">Mass [g].</param>
@@ -24,6 +31,13 @@ public sealed record ChargeComponent(Solvent Solvent, double Moles);
 /// <param name="MaxTemperatureK">Highest temperature it may see [K], when known.</param>
 public sealed record Product(double MassG, double MolarMassGPerMol, double? MaxTemperatureK)
 {
+    /// <summary>Mass [g]: finite and above zero.</summary>
+    public double MassG { get; init; } = double.IsFinite(MassG) && MassG > 0
+        ? MassG : throw new InputException("--product-mass", MassG.ToString(System.Globalization.CultureInfo.InvariantCulture) + " g", "a finite mass above zero");
+    /// <summary>Molar mass [g/mol]: finite and above zero.</summary>
+    public double MolarMassGPerMol { get; init; } = double.IsFinite(MolarMassGPerMol) && MolarMassGPerMol > 0
+        ? MolarMassGPerMol : throw new InputException("--product-molar-mass", MolarMassGPerMol.ToString(System.Globalization.CultureInfo.InvariantCulture) + " g/mol", "a finite molar mass above zero");
+
     /// <summary>Amount [mol].</summary>
     public double Moles => MassG / MolarMassGPerMol;
 }

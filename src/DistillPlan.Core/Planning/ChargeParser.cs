@@ -13,7 +13,7 @@ namespace DistillPlan.Core.Planning;
 /// </summary>
 public static partial class ChargeParser
 {
-    [GeneratedRegex(@"^(?<num>[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(?<unit>[a-zA-Zµ%]*)$")]
+    [GeneratedRegex(@"^(?<num>[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(?<unit>(?:[a-zA-Zµ%][a-zA-Zµ%0-9³]*)?)$")]
     private static partial Regex Amount();
 
     /// <summary>Allowed amount units, for messages.</summary>
@@ -23,13 +23,13 @@ public static partial class ChargeParser
     public static Charge Parse(string text, Basis basis, SolventLibrary library, string field = "charge")
     {
         if (string.IsNullOrWhiteSpace(text)) throw new InputException(field, text ?? "", "at least one solvent name, e.g. ethyl-acetate or ethanol=30,water=70");
-        var items = text.Split(',', StringSplitOptions.TrimEntries);
+        var items = Items(text, library, field);
         var parsed = new List<(Solvent Solvent, double Raw, double Moles, string Kind)>();   // kind: parts | percent | mol
         foreach (string item in items)
         {
             if (item.Length == 0) throw new InputException(field, text, "items separated by single commas, e.g. ethanol=30,water=70");
-            string[] kv = item.Split('=', 2, StringSplitOptions.TrimEntries);
-            var solvent = library.Find(kv[0]);
+            string[] kv = SplitAmount(item);
+            var solvent = library.Find(Unquote(kv[0]));
             if (parsed.Any(p => ReferenceEquals(p.Solvent, solvent)))
                 throw new InputException(field, item, $"each solvent once; {solvent.Name} is given twice");
             if (kv.Length == 1) { parsed.Add((solvent, double.NaN, double.NaN, "none")); continue; }
@@ -59,6 +59,67 @@ public static partial class ChargeParser
         return new Charge { Components = components, IsRelative = relative };
     }
 
+    /// <summary>
+    /// The items of a charge. Library names may hold commas (1,4-dioxane, N,N-dimethylformamide),
+    /// so commas split items except inside quotes ("1,4-dioxane"=30) and where the longest run of
+    /// pieces names a library solvent: <c>1,4-dioxane=30,water=70</c> is two items, not three.
+    /// </summary>
+    internal static List<string> Items(string text, SolventLibrary library, string field)
+    {
+        var pieces = new List<string>();
+        var current = new System.Text.StringBuilder();
+        char? quote = null;
+        foreach (char ch in text)
+        {
+            if (quote is null && ch is '"' or '\'') quote = ch;
+            else if (ch == quote) quote = null;
+            if (ch == ',' && quote is null) { pieces.Add(current.ToString().Trim()); current.Clear(); }
+            else current.Append(ch);
+        }
+        if (quote is not null) throw new InputException(field, text, $"a closing {quote} after a quoted solvent name");
+        pieces.Add(current.ToString().Trim());
+
+        var items = new List<string>();
+        for (int i = 0; i < pieces.Count;)
+        {
+            int take = 1;
+            // Only the last piece of a name may carry its amount; pieces before it have no '='.
+            // A name holds at most a few commas, so the search stays linear in the charge's length.
+            for (int j = i + 1; j < pieces.Count && j - i < 6 && !pieces[j - 1].Contains('='); j++)
+                if (library.TryFind(Unquote(SplitAmount(string.Join(",", pieces.Skip(i).Take(j - i + 1)))[0]), out _))
+                    take = j - i + 1;
+            items.Add(string.Join(",", pieces.Skip(i).Take(take)));
+            i += take;
+        }
+        return items;
+    }
+
+    private static string[] SplitAmount(string item)
+    {
+        // The '=' that separates the amount is the first one outside quotes.
+        char? quote = null;
+        for (int i = 0; i < item.Length; i++)
+        {
+            char ch = item[i];
+            if (quote is null && ch is '"' or '\'') quote = ch;
+            else if (ch == quote) quote = null;
+            else if (ch == '=' && quote is null) return [item[..i].Trim(), item[(i + 1)..].Trim()];
+        }
+        return [item.Trim()];
+    }
+
+    private static string Unquote(string name) =>
+        name.Length >= 2 && name[0] is '"' or '\'' && name[^1] == name[0] ? name[1..^1].Trim() : name;
+
+    /// <summary>How a solvent is written in a charge so that it reads back as that solvent: its name with hyphens for spaces.</summary>
+    public static string NameFor(Solvent s) => SolventLibrary.Normalise(s.Name);
+
+    /// <summary>Smallest and largest number accepted in an amount, in its own unit: beyond them a charge is a typing error.</summary>
+    public const double MinAmount = 1e-9, MaxAmount = 1e12;
+
+    /// <summary>Largest absolute charge [mol]: far above any plant batch (1000 m³ of water is 5.5e7 mol).</summary>
+    public const double MaxMoles = 1e10;
+
     /// <summary>One amount converted to mol (absolute) or to relative moles (parts, percent).</summary>
     private static (Solvent, double, double, string) ReadAmount(Solvent s, string text, Basis basis, string field)
     {
@@ -67,14 +128,18 @@ public static partial class ChargeParser
             throw new InputException(field, text, AllowedUnits);
         if (!(n > 0)) throw new InputException(field, text, "an amount above zero");
         string unit = m.Groups["unit"].Value;
+        if (!(n >= MinAmount && n <= (unit == "%" ? 100 : MaxAmount)))
+            throw new InputException(field, text, unit == "%"
+                ? "a percentage above zero and at most 100"
+                : $"a number from {MinAmount:0e0} to {MaxAmount:0e0} in its unit (write a large charge in kg, L or kmol)");
 
-        double? volumeM3 = unit switch { "uL" or "µL" => n * 1e-9, "mL" or "ml" => n * 1e-6, "L" or "l" => n * 1e-3, "m3" => n, _ => null };
+        double? volumeM3 = unit switch { "uL" or "µL" => n * 1e-9, "mL" or "ml" => n * 1e-6, "L" or "l" => n * 1e-3, "m3" or "m³" => n, _ => null };
         double? massG = unit switch { "mg" => n * 1e-3, "g" => n, "kg" => n * 1e3, _ => null };
         double? mol = unit switch { "mmol" => n * 1e-3, "mol" => n, "kmol" => n * 1e3, _ => null };
 
-        if (volumeM3 is double v) return (s, n, v / RequireMolarVolume(s, field, text), "mol");
-        if (massG is double g) return (s, n, g / s.MolarMassGPerMol, "mol");
-        if (mol is double x) return (s, n, x, "mol");
+        if (volumeM3 is double v) return Absolute(s, n, v / RequireMolarVolume(s, field, text), field, text);
+        if (massG is double g) return Absolute(s, n, g / s.MolarMassGPerMol, field, text);
+        if (mol is double x) return Absolute(s, n, x, field, text);
         if (unit is "" or "%")
         {
             // Parts or percent on the basis, turned into relative moles.
@@ -89,6 +154,11 @@ public static partial class ChargeParser
         }
         throw new InputException(field, text, AllowedUnits);
     }
+
+    private static (Solvent, double, double, string) Absolute(Solvent s, double n, double moles, string field, string text) =>
+        double.IsFinite(moles) && moles > 0 && moles <= MaxMoles
+            ? (s, n, moles, "mol")
+            : throw new InputException(field, text, $"an amount of at most {MaxMoles:0e0} mol ({s.Name})");
 
     private static double RequireMolarVolume(Solvent s, string field, string text) =>
         s.MolarVolumeM3PerMol ?? throw new InputException(field, text, $"a mass or mole amount: the library has no density for {s.Name}");

@@ -35,4 +35,33 @@ public static class PotFreezing
                 return new FreezingLimit(components[i], tm, "dominant");
         return null;
     }
+
+    /// <summary>
+    /// Refuses a pressure at which every solvent would be frozen: each one's own boiling
+    /// temperature there lies below its melting point, so no liquid is left to boil (a mixture
+    /// melts lower than its components, but not by the hundred kelvin such pressures need, and a
+    /// curve so far below its range is no answer). Names the option the pressure came from.
+    /// </summary>
+    /// <param name="solvents">The volatile solvents of the charge.</param>
+    /// <param name="pressurePa">The pressure asked for [Pa].</param>
+    /// <param name="field">The option the pressure came from, e.g. --at.</param>
+    /// <param name="text">The pressure as the user wrote it.</param>
+    public static void RequireLiquidAt(IReadOnlyList<Solvent> solvents, double pressurePa, string field, string text)
+    {
+        var parts = new List<string>();
+        foreach (var s in solvents)
+        {
+            if (s.MeltingPointK is not double tm) return;
+            double tb;
+            try { tb = s.VaporPressure.SaturationTemperature(pressurePa).TemperatureK; }
+            catch (OutOfRangeException) { continue; }
+            if (tb >= tm - MarginK) return;
+            parts.Add($"{s.Name} would boil at {C(tb)}, below its melting point {C(tm)}");
+        }
+        if (parts.Count == 0) return;
+        throw new InputException(field, text, "a pressure at which the charge is liquid",
+            $"{field}: at {InputException.Shorten(text)} the charge would be frozen, not boiling: {string.Join("; ", parts)}; give a higher pressure");
+    }
+
+    private static string C(double k) => (k - PhysicalConstants.ZeroCelsiusK).ToString("0.0", System.Globalization.CultureInfo.InvariantCulture) + " °C";
 }

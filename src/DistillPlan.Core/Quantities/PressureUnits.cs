@@ -62,6 +62,9 @@ public static class PressureUnits
     public static IReadOnlyList<PressureUnit> Display { get; } =
         [Millibar, Hectopascal, Pascal, Kilopascal, Bar, Torr, MillimetreMercury, InchMercury, Psi, Atmosphere];
 
+    /// <summary>Highest pressure read from a user [Pa]: 1000 bar, ten times any solvent's critical pressure.</summary>
+    public const double MaxPascal = 1e8;
+
     /// <summary>What the parser accepts, for error messages.</summary>
     public const string AllowedText =
         "a number with a unit: mPa, Pa, hPa, mbar, kPa, MPa, bar, Torr, mmHg, inHg, psia, atm (absolute), " +
@@ -110,6 +113,8 @@ public static class PressureUnits
         if (!(pascal > 0))
             throw new InputException(field, text, "an absolute pressure above zero (a gauge reading adds the local atmosphere, " +
                 Format(atmosphere, Millibar) + ")");
+        if (!(pascal <= MaxPascal))
+            throw new InputException(field, text, $"an absolute pressure of at most {MaxPascal / 1e5:0} bar (no solvent boils above its critical pressure, all of them below 100 bar)");
         return Pressure.FromPascal(pascal);
     }
 }

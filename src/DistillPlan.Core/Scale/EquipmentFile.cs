@@ -56,17 +56,7 @@ public static class EquipmentFile
     {
         if (!File.Exists(path))
             throw new InputException("--equipment", path, "an equipment file that exists (" + DefaultPath + ", or --equipment-file FILE)");
-        string text;
-        try
-        {
-            var info = new FileInfo(path);
-            if (info.Length > MaxFileBytes) throw new LibraryFormatException(path, 0, "file", $"is {info.Length} bytes; an equipment file is at most {MaxFileBytes} bytes");
-            text = File.ReadAllText(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new LibraryFormatException(path, 0, "file", "cannot be read: " + e.Message);
-        }
+        string text = YamlFileReader.ReadText(path, MaxFileBytes, (line, field, problem) => new LibraryFormatException(path, line, field, problem));
         return Parse(text, path);
     }
 
@@ -76,14 +66,9 @@ public static class EquipmentFile
     /// <summary>Parses equipment-file text; <paramref name="file"/> is used in messages.</summary>
     public static IReadOnlyList<EquipmentUnit> Parse(string text, string file)
     {
-        var stream = new YamlStream();
-        try { stream.Load(new StringReader(text)); }
-        catch (YamlException e)
-        {
-            throw new LibraryFormatException(file, (int)e.Start.Line, "yaml", "not valid YAML: " + e.Message.Split('\n')[0]);
-        }
-        if (stream.Documents.Count == 0) throw new LibraryFormatException(file, 1, "file", "the file is empty");
-        var root = new YamlCursor(stream.Documents[0].RootNode, "", file);
+        var rootNode = YamlFileReader.Parse(text, (line, field, problem) => new LibraryFormatException(file, line, field, problem))
+            ?? throw new LibraryFormatException(file, 1, "file", "the file is empty");
+        var root = new YamlCursor(rootNode, "", file);
         root.OnlyKeys("format", "units");
         string format = root.Required("format").String();
         if (format != FormatTag) throw root.Required("format").Error($"expected '{FormatTag}', got '{format}'");

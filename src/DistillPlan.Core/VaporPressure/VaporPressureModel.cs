@@ -41,9 +41,12 @@ public sealed class VaporPressureModel
     /// <param name="curves">Curves in order of preference; at least one.</param>
     /// <param name="criticalTemperatureK">Tc [K] when known: no vapour pressure above it.</param>
     /// <param name="criticalPressurePa">Pc [Pa] when known.</param>
+    /// <param name="estimatedCriticalTemperatureK">Without a published Tc: an estimate of it [K]
+    /// (Watson's Tc of an estimated curve, or Guldberg's 1.5 Tb), above which no vapour pressure is given either.</param>
     public VaporPressureModel(string substance, IReadOnlyList<IVaporPressureCurve> curves,
-        double? criticalTemperatureK = null, double? criticalPressurePa = null)
+        double? criticalTemperatureK = null, double? criticalPressurePa = null, double? estimatedCriticalTemperatureK = null)
     {
+        EstimatedCriticalTemperatureK = criticalTemperatureK is null ? estimatedCriticalTemperatureK : null;
         if (curves.Count == 0) throw new ArgumentException("at least one vapour-pressure curve is needed", nameof(curves));
         Substance = substance;
         Curves = curves;
@@ -60,6 +63,8 @@ public sealed class VaporPressureModel
     public IReadOnlyList<IVaporPressureCurve> Curves { get; }
     /// <summary>Critical temperature [K], when known.</summary>
     public double? CriticalTemperatureK { get; }
+    /// <summary>An estimate of Tc [K] when none is published: the model refuses above it too, rather than extrapolate without end.</summary>
+    public double? EstimatedCriticalTemperatureK { get; }
     /// <summary>Critical pressure [Pa], when known.</summary>
     public double? CriticalPressurePa { get; }
     /// <summary>Lowest temperature any curve covers [K].</summary>
@@ -94,6 +99,10 @@ public sealed class VaporPressureModel
             throw new OutOfRangeException(Substance, "critical point",
                 $"{temperatureK - PhysicalConstants.ZeroCelsiusK:F1} °C is above the critical temperature " +
                 $"{tc - PhysicalConstants.ZeroCelsiusK:F1} °C; there is no liquid and no vapour pressure there");
+        if (EstimatedCriticalTemperatureK is double etc && temperatureK > etc)
+            throw new OutOfRangeException(Substance, "estimated critical point",
+                $"{temperatureK - PhysicalConstants.ZeroCelsiusK:F1} °C is above the estimated critical temperature " +
+                $"{etc - PhysicalConstants.ZeroCelsiusK:F1} °C (no Tc is published in the library); no vapour pressure is given there");
 
         foreach (var band in _bands)
             if (band.Contains(temperatureK))
@@ -107,8 +116,12 @@ public sealed class VaporPressureModel
         if (SegmentCurve(temperatureK) is { } curve)
             return new PsatResult(Math.Exp(ExtendedLnP(curve, temperatureK)), temperatureK, curve, !Curves.Any(c => c.Covers(temperatureK)));
 
-        // Outside every range: extend the nearest edge along ln P = a − b/T.
-        var nearest = Curves.MinBy(c => DistanceOutside(c, temperatureK))!;
+        // Outside every range: extend along ln P = a − b/T the curve that answers at that edge of
+        // the segments, so P(T) stays continuous and rising across the edge (extending another
+        // curve that merely reaches a little further made cyclohexane's P drop by 1 % at 279.69 K).
+        var nearest = _segments.Count > 0
+            ? (temperatureK < _segments[0].LoK ? _segments[0].Curve : _segments[^1].Curve)
+            : Curves.MinBy(c => DistanceOutside(c, temperatureK))!;
         return new PsatResult(Math.Exp(ExtendedLnP(nearest, temperatureK)), temperatureK, nearest, true);
     }
 
@@ -135,8 +148,8 @@ public sealed class VaporPressureModel
         double target = Math.Log(pressurePa);
         double f(double t) => Math.Log(SaturationPressure(t).PressurePa) - target;
         double lo = Math.Max(1.0, MinK * 0.3);
-        double hi = CriticalTemperatureK ?? MaxK * 1.5;
-        if (!(f(lo) < 0 && f(hi) > 0))
+        double hi = CriticalTemperatureK ?? EstimatedCriticalTemperatureK ?? MaxK * 1.5;
+        if (!(f(lo) < 0 && f(hi) >= 0))
             throw new OutOfRangeException(Substance, "saturation temperature",
                 $"no boiling temperature found for {pressurePa / 100:G4} mbar between {lo:F0} K and {hi:F0} K");
         double root = MathNet.Numerics.RootFinding.Brent.FindRoot(f, lo, hi, 1e-10, 200);

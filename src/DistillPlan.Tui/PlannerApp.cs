@@ -23,6 +23,7 @@ public static class PlannerApp
         // From here on plans are computed off the UI thread and handed back through the main loop.
         vm.Scheduler = new BackgroundPlanScheduler(action => app.Invoke(action), BackgroundPlanScheduler.DefaultDebounce);
         using var window = new PlannerWindow(vm);
+        window.AttachTo(app);
         window.FocusSearch();
         app.Run(window);
         return 0;

@@ -30,6 +30,7 @@ public sealed class FitFormTests : IDisposable
         _app.Driver!.SetScreenSize(80, 24);
         _vm = new PlannerViewModel(TestLibrary.Library);
         _window = new PlannerWindow(_vm, Path.Combine(_dir, "solvents.yaml"));
+        _window.AttachTo(_app);
         _session = _app.Begin(_window)!;
         _window.FocusSearch();
         _app.LayoutAndDraw();

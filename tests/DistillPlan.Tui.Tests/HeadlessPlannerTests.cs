@@ -22,6 +22,7 @@ public sealed class HeadlessPlannerTests : IDisposable
         _app.Driver!.SetScreenSize(80, 24);
         _vm = new PlannerViewModel(TestLibrary.Library);
         _window = new PlannerWindow(_vm);
+        _window.AttachTo(_app);
         _session = _app.Begin(_window)!;
         _window.FocusSearch();
         _app.LayoutAndDraw();

@@ -11,7 +11,7 @@ namespace DistillPlan.Tui.Views;
 /// log10(P/unit), ticks are labelled at whole decades of that unit, so the axis and the legend
 /// say the same unit. GraphView draws its axes through graph zero, so the graph's origin is put
 /// at the bottom-left corner of the range (every point is plotted relative to it): the axes stay
-/// at the edges even below 1 mbar or 0 °C. It takes no focus: there is nothing to pan, and arrow
+/// at the edges even below 1 mbar or 0 °C. It has no keys: there is nothing to pan, and arrow
 /// keys stay with the views that use them. The ranges are refitted on resize.
 /// </summary>
 internal sealed class LogPressureGraph : GraphView
@@ -20,7 +20,10 @@ internal sealed class LogPressureGraph : GraphView
 
     public LogPressureGraph()
     {
-        CanFocus = false;
+        // Focusable, so a pane showing only a graph has somewhere for focus to rest (not the tab
+        // header), but with no keys of its own: GraphView's arrow-key panning is removed.
+        CanFocus = true;
+        KeyBindings.Clear();
         MarginLeft = 7;
         MarginBottom = 2;
         AxisY.Increment = 1;
@@ -39,7 +42,11 @@ internal sealed class LogPressureGraph : GraphView
     public void SetRange(double minX, double maxX, double minLog10Mbar, double maxLog10Mbar, string xTitle, PressureUnit unit)
     {
         _shift = Math.Log10(100 / unit.Pascal);
-        _minY = Math.Floor(minLog10Mbar + _shift + 1e-9);
+        // A decade of room below the lowest point when it is near a decade: GraphView draws the x axis
+        // on the bottom row of the data, and a pump line there would merge with it.
+        double low = minLog10Mbar + _shift;
+        _minY = Math.Floor(low + 1e-9);
+        if (low - _minY < 0.75) _minY -= 1;
         _maxY = Math.Max(Math.Ceiling(maxLog10Mbar + _shift - 1e-9), _minY + 1);
         if (!(maxX > minX)) maxX = minX + 1;
         // About six ticks, the left edge on a round one, so tick labels are round numbers.

@@ -53,7 +53,10 @@ public sealed class PlannerWindow : Window
             // The pane's key in its tab title: the tabs double as the key legend for panes.
             _panes[i].Title = $"F{i + 2} {_panes[i].Title}";
             _tabs.Add(_panes[i]);
+            // Arrows and page keys that no view in the pane used stop at the pane: they never also switch tabs.
+            _panes[i].KeyDown += (_, key) => { if (PaneKeys.Any(k => k == key)) key.Handled = true; };
         }
+        NoFocusOnTabHeaders();
 
         // The main keys on the bottom line, from the one key map, as plain text: readable without colour.
         var bar = new Label
@@ -69,6 +72,21 @@ public sealed class PlannerWindow : Window
         KeyDown += (_, key) => { if (Handle(key)) key.Handled = true; };
         vm.Changed += ShowAll;
         ShowAll();
+    }
+
+    private static readonly Key[] PaneKeys = [Key.CursorLeft, Key.CursorRight, Key.CursorUp, Key.CursorDown, Key.PageUp, Key.PageDown, Key.Home, Key.End];
+
+    /// <summary>
+    /// Takes the planner's own keys (KeyMap) before any field sees them, so a text field's editing
+    /// keys (Ctrl+E, Ctrl+R …) never hide them; while a dialog is on top, every key is the dialog's.
+    /// </summary>
+    public void AttachTo(Terminal.Gui.App.IApplication app)
+    {
+        NoFocusOnTabHeaders();
+        app.Keyboard.KeyDown += (_, key) =>
+        {
+            if (!key.Handled && ReferenceEquals(app.TopRunnableView, this) && Handle(key)) key.Handled = true;
+        };
     }
 
     /// <summary>The last thing the planner said (a file opened, saved or exported, or why not): one line, never a stack trace.</summary>
@@ -110,8 +128,17 @@ public sealed class PlannerWindow : Window
         ShowPane(_charge);
     }
 
+    // The tab headers take no focus: F2-F6 choose panes, and a focused header showed no marker without colour.
+    private void NoFocusOnTabHeaders()
+    {
+        foreach (var pane in _panes)
+            if (pane.Border?.View is View border)
+                foreach (var header in border.SubViews) header.CanFocus = false;
+    }
+
     private void ShowPane(View pane)
     {
+        NoFocusOnTabHeaders();
         _help.Visible = false;
         _fit.Visible = false;
         _tabs.Value = pane;

@@ -24,7 +24,7 @@ internal sealed class RampPane : View
         Height = Dim.Fill();
         CanFocus = true;
         _table.Style.ExpandLastColumn = false;
-        _graph = new LogPressureGraph { X = Pos.Right(_table) + 1, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(2) };
+        _graph = new LogPressureGraph { X = Pos.Right(_table) + 1, Y = 1, Width = Dim.Fill(), Height = Dim.Fill(2), CanFocus = false };
         FocusMark.Attach(_table, _caption, () => " Steps: Up/Down, PgUp/PgDn; Left/Right: columns" + (_columns > 4 ? $" ({_columns} in all)" : ""));
         Add(_caption, _table, _graph, _note);
     }

@@ -276,7 +276,7 @@ public sealed class ScreenLayoutTests : IDisposable
         _h.Dialogs.Paths.Enqueue(csv);
         _h.Press(Key.E.WithCtrl);
         Assert.Contains("ramp", _h.Dialogs.PathTitles[^1]);
-        Assert.Contains($"Exported the ramp (strip) report to {csv}", _h.Screen());
+        Assert.Contains($"Exported the ramp report to {csv}", _h.Screen());
         Assert.True(File.Exists(csv));
     }
 

@@ -58,7 +58,7 @@ internal sealed class ChargePane : View
             _settings.Add((key, field));
             above = field.Caption;
         }
-        _title = new Field(this, above, "Title:", 15, 40, v => vm.Edit(d => d with { Title = v }));
+        _title = new Field(this, above, "Title:", 15, 60, v => vm.Edit(d => d with { Title = v }));
         // Notes: free text saved in the plan file (batch numbers, observations); Tab leaves the field.
         var notesCaption = new Label { X = 0, Y = Pos.Bottom(_title.Caption), Width = 16 };
         _notes = new TextView { X = Pos.Right(notesCaption), Y = Pos.Top(notesCaption), Width = Dim.Fill(), Height = Dim.Fill(), TabKeyAddsTab = false, WordWrap = true };

@@ -245,10 +245,10 @@ public sealed class PlannerWindow : Window
     private void Export()
     {
         bool ramp = CurrentPane == _ramp;
-        string what = ramp ? "ramp (strip) report" : "plan report";
+        string what = ramp ? "ramp report" : "plan report";
         string folder = _vm.FilePath is string f ? Path.GetDirectoryName(f)! : Environment.CurrentDirectory;
         string stem = _vm.FilePath is string g ? Path.GetFileNameWithoutExtension(g) : "plan";
-        string? path = _dialogs.SavePath($"Export the {what}: .md .csv .json .txt, or the plot .svg .png",
+        string? path = _dialogs.SavePath($"Export {what} (.md .csv .json .txt .svg .png)",
             Path.Combine(folder, stem + (ramp ? "-ramp" : "") + ".md"));
         if (path is null) return;
         try

@@ -12,7 +12,8 @@ namespace DistillPlan.Tui.Views;
 /// </summary>
 internal sealed class SetpointReadout : FrameView
 {
-    private readonly Label[] _lines = [.. Enumerable.Range(0, 3).Select(i => new Label { X = 0, Y = i, Width = Dim.Fill() })];
+    // One row each: a long line is cut at the edge, never wrapped over the next one.
+    private readonly Label[] _lines = [.. Enumerable.Range(0, 3).Select(i => new Label { X = 0, Y = i, Width = Dim.Fill(), Height = 1 })];
 
     public SetpointReadout()
     {

@@ -210,7 +210,7 @@ public sealed class ScreenLayoutTests : IDisposable
     {
         _h.App.Driver!.SetScreenSize(120, 40);
         _h.Press(Key.F3);
-        Assert.Contains("(bath→vapour, vapour→condenser)", LineWith("ΔT steps:"));
+        Assert.Contains("default 20 K bath→vapour, 20 K vapour→cond.", LineWith("ΔT steps:"));
         Assert.DoesNotContain("bath,condenser", _h.Screen());
     }
 
@@ -300,6 +300,7 @@ public sealed class ScreenLayoutTests : IDisposable
         _h.Press(Key.PageDown, 3);
         Assert.True(_h.Window.Equipment.EntryOf(EquipmentPane.Shown.Last().Key).HasFocus);
         Assert.Contains(">" + EquipmentPane.Shown.Last().Caption, _h.Screen());
+        Assert.Contains("ΔT steps in K: one for both (20), or bath→vapour,vapour→condenser (25,20).", _h.Screen());
     }
 
     [Fact]

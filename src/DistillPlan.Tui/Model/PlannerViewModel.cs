@@ -257,7 +257,9 @@ public sealed class PlannerViewModel
     {
         string hint = PlanSettings.DefaultHint(PlanSettings.Get(settingKey), Document.Inputs, Display);
         // Two numbers side by side need their names: which step is which.
-        return settingKey == "delta-t" ? hint + " (bath→vapour, vapour→condenser)" : hint;
+        if (settingKey != "delta-t") return hint;
+        var steps = hint.StartsWith("default ", StringComparison.Ordinal) ? hint["default ".Length..].Split(", ") : [];
+        return steps.Length == 2 ? $"default {steps[0]} bath→vapour, {steps[1]} vapour→cond." : hint + " (bath→vapour, vapour→condenser)";
     }
 
     /// <summary>The ramp table: the strip report's steps table (the same columns as <c>distillplan strip</c>).</summary>

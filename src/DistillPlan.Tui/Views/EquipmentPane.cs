@@ -19,6 +19,7 @@ internal sealed class EquipmentPane : View
     private readonly PlannerViewModel _vm;
     private readonly List<(PlanSetting Setting, Field Field)> _fields = [];
     private readonly int _rows;
+    private const int NoteRows = 3;
 
     /// <summary>The settings this pane shows: equipment, size, rules (the product limit is on the charge pane) and the strip.</summary>
     public static IEnumerable<PlanSetting> Shown => PlanSettings.All.Where(s =>
@@ -43,11 +44,11 @@ internal sealed class EquipmentPane : View
         }
         var note = new Label
         {
-            X = 0, Y = Pos.Bottom(above!), Width = Dim.Fill(), Height = 2,
-            Text = "Empty = default. Pressures: 25mbar, 15 Torr, 2.5kPa, -0.95barg (bare = mbar)\nTemperatures: 40, 40C, 313K, 104F (bare = °C). ΔT steps in K: bath→vapour,vapour→condenser.",
+            X = 0, Y = Pos.Bottom(above!), Width = Dim.Fill(), Height = NoteRows,
+            Text = "Empty = default. Pressures: 25mbar, 15 Torr, 2.5kPa, -0.95barg (bare = mbar)\nTemperatures: 40, 40C, 313K, 104F (bare = °C).\nΔT steps in K: one for both (20), or bath→vapour,vapour→condenser (25,20).",
         };
         Add(note);
-        _rows = _fields.Count + 2;
+        _rows = _fields.Count + NoteRows;
         ViewportSettings |= ViewportSettingsFlags.HasVerticalScrollBar;
         ViewportChanged += (_, _) => SizeContent();
         KeyDown += OnKey;
@@ -68,6 +69,8 @@ internal sealed class EquipmentPane : View
         int h = Viewport.Height;
         if (h <= 0) return;
         int top = Viewport.Y;
+        // The last field brings the notes under it into view too.
+        if (row == _fields.Count - 1) row = _rows - 1;
         if (row < top) top = row;
         else if (row >= top + h) top = row - h + 1;
         if (top != Viewport.Y) Viewport = Viewport with { Y = top };

@@ -24,29 +24,39 @@ public static class KeyMap
     public const string FitKeyText = "F8";
     /// <summary>Open a plan file.</summary>
     public static readonly Key Open = Key.O.WithCtrl;
+    /// <summary>Open one of the recent plan files.</summary>
+    public static readonly Key Recent = Key.R.WithCtrl;
     /// <summary>Save the plan.</summary>
     public static readonly Key Save = Key.S.WithCtrl;
+    /// <summary>Export the report or the plot.</summary>
+    public static readonly Key Export = Key.E.WithCtrl;
     /// <summary>Quit.</summary>
     public static readonly Key Quit = Key.Q.WithCtrl;
+    /// <summary>Close what is open over the panes, or back to the solvent search; never discards anything.</summary>
+    public static readonly Key Back = Key.Esc;
 
     /// <summary>All bindings, for the help overlay.</summary>
     public static IReadOnlyList<KeyBinding> All { get; } =
     [
-        new(Help, "F1", "Show or hide this help (Esc also hides it)", "Help"),
-        new(Panes[0], "F2", "Charge: find a solvent, amounts, basis, product"),
-        new(Panes[1], "F3", "Equipment: heating, coolant, pump, atmosphere, delta T"),
+        new(Help, "F1", "Show or hide this help", "Help"),
+        new(Panes[0], "F2", "Charge: find a solvent, amounts, basis, product, notes"),
+        new(Panes[1], "F3", "Equipment: heating, coolant, pump, size, delta T, strip"),
         new(Panes[2], "F4", "Plan: setpoints, checks, assumptions, cautions"),
         new(Panes[3], "F5", "Curve: vapour pressure; O setpoint, C condenser, P pump"),
-        new(Panes[4], "F6", "Ramp: strip ramp as a table and a plot"),
+        new(Panes[4], "F6", "Ramp: strip ramp as a table and a plot; Ctrl+E exports it"),
         new(Unit, "F7", "Next pressure unit (mbar, hPa, Pa, kPa, bar, Torr ...)", "Unit"),
-        new(Fit, FitKeyText, "Fit your own compound from measured points; add it to your library", "Fit"),
-        new(Save, "Ctrl+S", "Save the plan (asks before replacing a file)", "Save"),
-        new(Open, "Ctrl+O", "Open a plan file", "Open"),
+        new(Fit, FitKeyText, "Fit your own compound from measured points", "Fit"),
+        new(Save, "Ctrl+S", "Save the plan file (asks before replacing a file)", "Save"),
+        new(Open, "Ctrl+O", "Open a plan file (asks first if changes are unsaved)", "Open"),
+        new(Recent, "Ctrl+R", "Open a recent plan file"),
+        new(Export, "Ctrl+E", "Export: report .md .csv .json .txt, plot .svg .png", "Export"),
         new(Quit, "Ctrl+Q", "Quit (asks first if there are unsaved changes)", "Quit"),
-        new(null, "Tab / Shift+Tab", "Next / previous field"),
+        new(Back, "Esc", "Close help or fit form, else back to Find; never quits"),
+        new(null, "Tab / Shift+Tab", "Next / previous field (the one marked > has the keys)"),
         new(null, "Enter (find)", "Use the marked (>) solvent as the whole charge"),
-        new(null, "Ctrl+A (find)", "Add the marked solvent to a mixture; type its amount"),
+        new(null, "Ctrl+A (find)", "Add the marked solvent as NAME=, then type its amount"),
         new(null, "Down (find)", "Into the list of matches; Up/Down choose"),
-        new(null, "Arrows, PgUp/PgDn", "Scroll the plan text and the ramp table"),
+        new(null, "PgUp / PgDn", "Scroll the pane with focus: plan, ramp steps, fields"),
+        new(null, "Left / Right (ramp)", "Move through the ramp table's columns"),
     ];
 }

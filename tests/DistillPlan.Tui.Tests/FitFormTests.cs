@@ -29,7 +29,8 @@ public sealed class FitFormTests : IDisposable
         _app.Init(DriverRegistry.Names.ANSI);
         _app.Driver!.SetScreenSize(80, 24);
         _vm = new PlannerViewModel(TestLibrary.Library);
-        _window = new PlannerWindow(_vm, Path.Combine(_dir, "solvents.yaml"));
+        _window = new PlannerWindow(_vm, Path.Combine(_dir, "solvents.yaml"), new FakeDialogs { Answer = _ => 0 }, new RecentPlans(Path.Combine(_dir, "recent.txt")));
+        _window.AttachTo(_app);
         _session = _app.Begin(_window)!;
         _window.FocusSearch();
         _app.LayoutAndDraw();

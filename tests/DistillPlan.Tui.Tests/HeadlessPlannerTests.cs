@@ -21,7 +21,10 @@ public sealed class HeadlessPlannerTests : IDisposable
         _app.Init(DriverRegistry.Names.ANSI);
         _app.Driver!.SetScreenSize(80, 24);
         _vm = new PlannerViewModel(TestLibrary.Library);
-        _window = new PlannerWindow(_vm);
+        // Questions answered "go on" (first button) and recent files kept in a temporary folder: no modal loop, no user files.
+        _window = new PlannerWindow(_vm, Path.Combine(Path.GetTempPath(), "dp-none", "solvents.yaml"), new FakeDialogs { Answer = _ => 0 },
+            new Model.RecentPlans(Path.Combine(Path.GetTempPath(), $"dp-recent-{Guid.NewGuid():N}.txt")));
+        _window.AttachTo(_app);
         _session = _app.Begin(_window)!;
         _window.FocusSearch();
         _app.LayoutAndDraw();

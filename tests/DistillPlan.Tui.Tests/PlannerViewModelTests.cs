@@ -28,7 +28,7 @@ public sealed class PlannerViewModelTests
         var expected = Reference(PlannerViewModel.DefaultCharge);
         Assert.NotNull(vm.Outcome.Plan);
         Assert.Equal(expected.VacuumSetpoint, vm.Outcome.Plan!.VacuumSetpoint);
-        Assert.Contains($"Vacuum {vm.P(expected.VacuumSetpoint)}", vm.Readout().Setpoints);
+        Assert.Contains($"Vacuum {vm.P(expected.VacuumSetpoint)}", vm.Readout()[0]);
         Assert.False(vm.IsDirty);
     }
 
@@ -42,7 +42,8 @@ public sealed class PlannerViewModelTests
         var expected = Reference("ethanol", PlanInputs.Of(("coolant-temp", "0")));
         Assert.Equal(expected.VacuumSetpoint, vm.Outcome.Plan!.VacuumSetpoint);
         Assert.Equal(expected.Bath, vm.Outcome.Plan.Bath);
-        Assert.Equal(1, changes);
+        // Once for the edit (the plan is computing), once when its plan arrives.
+        Assert.Equal(2, changes);
         Assert.True(vm.IsDirty);
     }
 
@@ -50,15 +51,25 @@ public sealed class PlannerViewModelTests
     [InlineData("ethanoll", "nearest names")]
     [InlineData("ethanol=abc", "ethanol")]
     [InlineData("", "at least one solvent")]
-    public void Bad_charge_text_gives_the_one_line_message_and_no_plan(string charge, string fragment)
+    public void Bad_charge_text_gives_the_one_line_message_and_keeps_the_last_good_plan_marked_as_such(string charge, string fragment)
     {
         var vm = New();
+        var good = vm.Outcome.Plan;
         vm.Edit(d => d with { Charge = charge });
-        Assert.Null(vm.Outcome.Plan);
-        Assert.Contains(fragment, vm.Outcome.Error);
-        Assert.DoesNotContain("\n", vm.Outcome.Error);
-        Assert.Contains(vm.Outcome.Error!, vm.Readout().Detail);
-        Assert.Contains(vm.Outcome.Error!, vm.PlanReport());
+        Assert.Same(good, vm.Outcome.Plan);
+        Assert.False(vm.IsCurrent);
+        Assert.Contains(fragment, vm.Error);
+        Assert.DoesNotContain("\n", vm.Error);
+        var readout = vm.Readout(width: 1000);
+        Assert.StartsWith("Last good: Bath", readout[0]);
+        Assert.Equal("Cannot plan: " + vm.Error, readout[1]);
+        Assert.Contains(vm.Error!, vm.PlanReport(width: 1000));
+        Assert.Contains("LAST GOOD PLAN", vm.PlanReport());
+        // Fixed again: the plan is current and the error is gone.
+        vm.Edit(d => d with { Charge = "ethanol" });
+        Assert.True(vm.IsCurrent);
+        Assert.Null(vm.Error);
+        Assert.StartsWith("Bath", vm.Readout()[0]);
     }
 
     [Fact]
@@ -66,8 +77,7 @@ public sealed class PlannerViewModelTests
     {
         var vm = New();
         vm.SetSetting("pump-limit", "5 bananas");
-        Assert.Null(vm.Outcome.Plan);
-        Assert.StartsWith("--pump-limit", vm.Outcome.Error);
+        Assert.StartsWith("--pump-limit", vm.Error);
     }
 
     [Fact]
@@ -94,7 +104,7 @@ public sealed class PlannerViewModelTests
         vm.CycleUnit();
         Assert.NotEqual("mbar", vm.Unit.Symbol);
         Assert.Equal(before, vm.Outcome.Plan!.VacuumSetpoint);
-        Assert.Contains(vm.Unit.Symbol, vm.Readout().Setpoints);
+        Assert.Contains(vm.Unit.Symbol, vm.Readout()[0]);
     }
 
     [Fact]

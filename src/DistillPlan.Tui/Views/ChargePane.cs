@@ -1,3 +1,6 @@
+// TextView is marked obsolete in Terminal.Gui 2.5 in favour of a separate editor package; it is
+// still the library's own multi-line field, and notes need nothing more.
+#pragma warning disable CS0618
 using System.Collections.ObjectModel;
 using DistillPlan.Core.Planning.Settings;
 using DistillPlan.Tui.Model;
@@ -19,6 +22,8 @@ internal sealed class ChargePane : View
     private readonly ObservableCollection<string> _lines = [];
     private IReadOnlyList<SolventHit> _hits = [];
     private readonly Field _charge, _title;
+    private readonly TextView _notes;
+    private bool _showingNotes;
     private readonly List<(string Key, Field Field)> _settings = [];
 
     /// <summary>The settings shown under the charge.</summary>
@@ -32,12 +37,15 @@ internal sealed class ChargePane : View
         Height = Dim.Fill();
         CanFocus = true;
 
-        var find = new Label { Text = "Find solvent:", X = 0, Y = 0, Width = 15 };
+        var find = new Label { X = 0, Y = 0, Width = 16 };
         _search = new TextField { X = Pos.Right(find), Y = 0, Width = 22 };
+        FocusMark.Attach(_search, find, "Find solvent:");
         var how = new Label { Text = "Enter use  Ctrl+A add  Down list", X = Pos.Right(_search) + 1, Y = 0, Width = Dim.Fill() };
-        _matches = new ListView { X = 13, Y = Pos.Bottom(find), Width = Dim.Fill(), Height = 4 };
+        var listCaption = new Label { X = 0, Y = 1, Width = 13 };
+        _matches = new ListView { X = 14, Y = Pos.Bottom(find), Width = Dim.Fill(), Height = 4 };
+        FocusMark.Attach(_matches, listCaption, " matches");
         _matches.SetSource(_lines);
-        Add(find, _search, how, _matches);
+        Add(find, _search, how, listCaption, _matches);
 
         _charge = new Field(this, _matches, "Charge:", 15, 40, v => vm.Edit(d => d with { Charge = v }));
         _charge.Hint.Text = "NAME=AMOUNT,...";
@@ -50,7 +58,13 @@ internal sealed class ChargePane : View
             _settings.Add((key, field));
             above = field.Caption;
         }
-        _title = new Field(this, above, "Title:", 15, 40, v => vm.Edit(d => d with { Title = v }));
+        _title = new Field(this, above, "Title:", 15, 60, v => vm.Edit(d => d with { Title = v }));
+        // Notes: free text saved in the plan file (batch numbers, observations); Tab leaves the field.
+        var notesCaption = new Label { X = 0, Y = Pos.Bottom(_title.Caption), Width = 16 };
+        _notes = new TextView { X = Pos.Right(notesCaption), Y = Pos.Top(notesCaption), Width = Dim.Fill(), Height = Dim.Fill(), TabKeyAddsTab = false, WordWrap = true };
+        FocusMark.Attach(_notes, notesCaption, "Notes:");
+        _notes.ContentsChanged += (_, _) => { if (!_showingNotes) vm.SetNotes(_notes.Text); };
+        Add(notesCaption, _notes);
 
         _search.TextChanged += (_, _) => ShowMatches();
         _search.KeyDown += OnSearchKey;
@@ -74,7 +88,20 @@ internal sealed class ChargePane : View
             field.Hint.Text = _vm.DefaultFor(key);
         }
         _title.Show(d.Title);
+        // The view's text ends lines its own way; compare as the document keeps notes.
+        if (_notes.Text.ReplaceLineEndings("\n").TrimEnd() != d.Notes)
+        {
+            _showingNotes = true;
+            try { _notes.Text = d.Notes; }
+            finally { _showingNotes = false; }
+        }
     }
+
+    /// <summary>The charge entry (tests read its cursor).</summary>
+    internal TextField ChargeEntry => _charge.Entry;
+
+    /// <summary>The notes field.</summary>
+    internal TextView Notes => _notes;
 
     private void ShowMatches()
     {
@@ -116,8 +143,12 @@ internal sealed class ChargePane : View
     private void Use(bool add)
     {
         if (Selected() is not SolventHit hit) return;
-        if (add) _vm.AddSolvent(hit.Solvent); else _vm.UseSolvent(hit.Solvent);
+        if (!add) { _vm.UseSolvent(hit.Solvent); Refresh(); return; }
+        int cursor = _vm.AddSolvent(hit.Solvent);
         Refresh();
-        if (add) { _charge.Entry.SetFocus(); _charge.Entry.MoveEnd(); }
+        _charge.Entry.SetFocus();
+        _charge.Entry.InsertionPoint = cursor;
+        // Focus selects the whole text; the amount typed next must not replace it.
+        _charge.Entry.ClearAllSelection();
     }
 }

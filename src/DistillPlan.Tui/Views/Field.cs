@@ -5,7 +5,8 @@ namespace DistillPlan.Tui.Views;
 
 /// <summary>
 /// A labelled text entry with a hint to its right: the building block of the input panes.
-/// Laid out below <paramref name="above"/> so panes stack fields by relationship.
+/// Laid out below <paramref name="above"/> so panes stack fields by relationship. The caption
+/// carries the focus marker (">"), so the field being typed in is visible without colour.
 /// </summary>
 internal sealed class Field
 {
@@ -15,16 +16,22 @@ internal sealed class Field
 
     public Field(View parent, View? above, string caption, int labelWidth, int entryWidth, Action<string> changed)
     {
-        Caption = new Label { Text = caption, X = 0, Y = above is null ? 0 : Pos.Bottom(above), Width = labelWidth };
+        Caption = new Label { X = 0, Y = above is null ? 0 : Pos.Bottom(above), Width = labelWidth + 1 };
         Entry = new TextField { X = Pos.Right(Caption), Y = Pos.Top(Caption), Width = entryWidth };
         Hint = new Label { X = Pos.Right(Entry) + 1, Y = Pos.Top(Caption), Width = Dim.Fill() };
-        Entry.TextChanged += (_, _) => changed(Entry.Text);
+        FocusMark.Attach(Entry, Caption, caption);
+        Entry.TextChanged += (_, _) => { if (!_showing) changed(Entry.Text); };
         parent.Add(Caption, Entry, Hint);
     }
 
-    /// <summary>Shows a value without echoing it back as an edit when it is already there.</summary>
+    private bool _showing;
+
+    /// <summary>Shows a value without echoing it back as an edit.</summary>
     public void Show(string value)
     {
-        if (Entry.Text != value) Entry.Text = value;
+        if (Entry.Text == value) return;
+        _showing = true;
+        try { Entry.Text = value; }
+        finally { _showing = false; }
     }
 }

@@ -12,13 +12,17 @@ internal sealed class HelpOverlay : FrameView
     public HelpOverlay()
     {
         Title = "Keys (F1 or Esc closes)";
-        X = Pos.Center();
-        Y = Pos.Center();
-        Width = Dim.Fill(2);
-        Height = Dim.Auto(minimumContentDim: 3);
+        // The whole pane area, so the title is always on screen; the list scrolls when the terminal is short.
+        X = 0;
+        Y = 0;
+        Width = Dim.Fill();
+        Height = Dim.Fill(1);
         Visible = false;
         CanFocus = true;
-        var lines = KeyMap.All.Select(k => $"{k.KeyText,-17} {k.What}");
-        Add(new Label { X = 0, Y = 0, Width = Dim.Fill(), Text = string.Join("\n", lines) });
+        int pad = KeyMap.All.Max(k => k.KeyText.Length);
+        var lines = KeyMap.All.Select(k => k.KeyText.PadRight(pad) + " " + k.What);
+        var list = new ListView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
+        list.SetSource(new System.Collections.ObjectModel.ObservableCollection<string>(lines));
+        Add(list);
     }
 }

@@ -7,11 +7,13 @@ namespace DistillPlan.Tui.Views;
 
 /// <summary>
 /// The whole plan as text: setpoints, approach steps, checks with what to do, assumptions and
-/// cautions. A list of wrapped lines, so it scrolls with the arrow keys and Page Up/Down.
+/// cautions. A list of wrapped lines, the pane's only focusable view, so Up/Down and PgUp/PgDn
+/// scroll it whenever the pane is on show.
 /// </summary>
 internal sealed class PlanPane : View
 {
-    private readonly ListView _lines = new() { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };
+    private readonly Label _caption = new() { X = 0, Y = 0, Width = Dim.Fill() };
+    private readonly ListView _lines = new() { X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Fill() };
     private readonly ObservableCollection<string> _items = [];
     private PlannerViewModel? _vm;
 
@@ -23,8 +25,12 @@ internal sealed class PlanPane : View
         CanFocus = true;
         _lines.SetSource(_items);
         _lines.ViewportChanged += (_, _) => Rewrap();
-        Add(_lines);
+        FocusMark.Attach(_lines, _caption, " Plan report: Up/Down, PgUp/PgDn scroll; Ctrl+E exports it");
+        Add(_caption, _lines);
     }
+
+    /// <summary>The report lines (tests read the scroll position).</summary>
+    internal ListView Lines => _lines;
 
     public void Show(PlannerViewModel vm)
     {

@@ -143,8 +143,8 @@ public static class JsonReport
         _ => key,
     };
 
-    /// <summary>A value in JSON units: °C (2 decimals), mbar (6 significant figures), fractions, numbers, text, true/false.</summary>
-    public static JsonNode? Value(Quantity q) => q.Kind switch
+    /// <summary>A value in JSON units: °C (2 decimals), mbar (6 significant figures), fractions, numbers, text, true/false; null for a number that is not finite (a time that never ends).</summary>
+    public static JsonNode? Value(Quantity q) => q.Kind != QuantityKind.Text && !double.IsFinite(q.Value) ? null : q.Kind switch
     {
         QuantityKind.Temperature => JsonValue.Create(Math.Round(q.Value - Core.PhysicalConstants.ZeroCelsiusK, 2)),
         QuantityKind.TemperatureDifference => JsonValue.Create(Math.Round(q.Value, 3)),

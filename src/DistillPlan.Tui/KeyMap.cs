@@ -22,6 +22,10 @@ public static class KeyMap
     public static readonly Key Fit = Key.F8;
     /// <summary>How <see cref="Fit"/> is written.</summary>
     public const string FitKeyText = "F8";
+    /// <summary>Plan a solvent swap of the charge.</summary>
+    public static readonly Key Swap = Key.F9;
+    /// <summary>How <see cref="Swap"/> is written.</summary>
+    public const string SwapKeyText = "F9";
     /// <summary>Open a plan file.</summary>
     public static readonly Key Open = Key.O.WithCtrl;
     /// <summary>Open one of the recent plan files.</summary>
@@ -46,12 +50,13 @@ public static class KeyMap
         new(Panes[4], "F6", "Ramp: strip ramp as a table and a plot; Ctrl+E exports it"),
         new(Unit, "F7", "Next pressure unit (mbar, hPa, Pa, kPa, bar, Torr ...)", "Unit"),
         new(Fit, FitKeyText, "Fit your own compound from measured points", "Fit"),
+        new(Swap, SwapKeyText, "Solvent swap of the charge: new solvent, residual, both methods"),
         new(Save, "Ctrl+S", "Save the plan file (asks before replacing a file)", "Save"),
         new(Open, "Ctrl+O", "Open a plan file (asks first if changes are unsaved)", "Open"),
         new(Recent, "Ctrl+R", "Open a recent plan file"),
         new(Export, "Ctrl+E", "Export: report .md .csv .json .txt, plot .svg .png", "Export"),
         new(Quit, "Ctrl+Q", "Quit (asks first if there are unsaved changes)", "Quit"),
-        new(Back, "Esc", "Close help or fit form, else back to Find; never quits"),
+        new(Back, "Esc", "Close help, fit or swap form, else back to Find; never quits"),
         new(null, "Tab / Shift+Tab", "Next / previous field (the one marked > has the keys)"),
         new(null, "Enter (find)", "Use the marked (>) solvent as the whole charge"),
         new(null, "Ctrl+A (find)", "Add the marked solvent as NAME=, then type its amount"),

@@ -62,6 +62,21 @@ public class ScaleVerbTests
     }
 
     [Theory]
+    // Found by the generated command lines: a vapour colder than the coolant leaves the condenser no capacity at all.
+    [InlineData("strip", "acetone=5g", "--vapor-temp", "-58.5", "--product-max", "5.497E-88")]
+    [InlineData("setpoints", "acetone=5g", "--vapor-temp", "-58.5", "--product-max", "5.497E-88")]
+    public void A_condenser_with_no_capacity_is_said_in_words_not_as_infinity(params string[] args)
+    {
+        foreach (var format in new[] { "text", "json" })
+        {
+            var r = CliRunner.Run([.. args, "--format", format]);
+            Assert.True(r.ExitCode is 0 or 2, r.Error);
+            Assert.DoesNotContain("Infinity", r.Output);
+            Assert.DoesNotContain("NaN", r.Output);
+        }
+    }
+
+    [Theory]
     [InlineData("--target", "2 furlongs")]
     [InlineData("--method", "sideways")]
     [InlineData("--to", "unobtainium")]

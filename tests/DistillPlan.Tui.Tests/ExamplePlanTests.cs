@@ -8,8 +8,9 @@ public sealed class ExamplePlanTests
     public static TheoryData<string> Examples()
     {
         var data = new TheoryData<string>();
+        // Every plan file; the demo equipment file (examples/equipment.yaml) is another format, tested in Core.
         foreach (var f in Directory.GetFiles(Path.Combine(TestLibrary.RepoRoot, "examples"), "*.yaml").Order())
-            data.Add(Path.GetFileName(f));
+            if (!File.ReadAllText(f).Contains("format: distillplan-equipment/", StringComparison.Ordinal)) data.Add(Path.GetFileName(f));
         return data;
     }
 

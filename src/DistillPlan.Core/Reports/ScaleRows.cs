@@ -9,7 +9,7 @@ namespace DistillPlan.Core.Reports;
 /// time, as people read them (W or kW, g/h or kg/h, min or h) and under the contract's JSON
 /// keys (heat_duty_w, evaporation_rate_g_per_h …, time_min).
 /// </summary>
-internal static class ScaleRows
+public static class ScaleRows
 {
     /// <summary>The rows of a plan's "Heat and time" section.</summary>
     public static IReadOnlyList<Row> ForPlan(Plan p, PlanScale s)
@@ -23,7 +23,9 @@ internal static class ScaleRows
                 Note = $"U·A·ΔT: {Num(s.Setup.UWPerM2K)} W/(m² K) × {Sig(h.AreaM2)} m² wetted × {Num(p.Bath.Kelvin - p.Vapor.Kelvin)} K",
             },
             new("Evaporation rate", MassRate(h.EvaporationGPerH)) { Note = VolumeRate(h.EvaporationMLPerH) + $" at the start; ΔHvap {Num(h.LatentHeatJPerMol / 1000)} kJ/mol" },
-            new("Condenser load", Quantity.Percent(h.CondenserShare)) { Note = PowerPair(h.HeatDutyW, h.CondenserCapacityW, s.Setup.Vessel) + " it can take" },
+            h.CondenserCapacityW > 0
+                ? new("Condenser load", Quantity.Percent(h.CondenserShare)) { Note = PowerPair(h.HeatDutyW, h.CondenserCapacityW, s.Setup.Vessel) + " it can take" }
+                : new("Condenser load", Quantity.Words(NoCondenser)),
         };
         // At atmospheric pressure no pump runs: what passes the condenser leaves by the vent.
         if (!p.AtAtmosphericPressure)
@@ -64,7 +66,8 @@ internal static class ScaleRows
         yield return new("Time", Quantity.Number(total / 60, "min"), "time_min") { MachineOnly = true };
         yield return new("Heat-up", Quantity.Number(up.TimeS / 60, "min"), "heat_up_time_min") { MachineOnly = true };
         var first = s.Steps[0].Heat!;
-        yield return new("Heat duty at the start", Power(first.HeatDutyW)) { Note = $"condenser {Pct(first.CondenserShare)} of its capacity, pump {Pct(first.PumpShare)} of its speed" };
+        string condenser = first.CondenserCapacityW > 0 ? $"condenser {Pct(first.CondenserShare)} of its capacity" : "condenser: " + NoCondenser;
+        yield return new("Heat duty at the start", Power(first.HeatDutyW)) { Note = $"{condenser}, pump {Pct(first.PumpShare)} of its speed" };
     }
 
     /// <summary>The contract's per-state fields (setpoints, and every strip step).</summary>
@@ -116,6 +119,9 @@ internal static class ScaleRows
         up.NotEvaluatedReason is string why ? $"heat-up not included ({why})"
         : $"heat-up {Duration(up.TimeS)} from the start temperature"
           + (up.EstimatedCpFor.Count > 0 ? $" (Cp of {string.Join(", ", up.EstimatedCpFor)} taken as {HeatUp.TypicalOrganicCpJPerGK:0.0} J/(g K), a rule of thumb)" : "");
+
+    /// <summary>What the condenser load says when the coolant is no colder than the vapour.</summary>
+    public const string NoCondenser = "nothing condenses: the coolant is not colder than the vapour";
 
     /// <summary>A duration as people say it: "25 min", "3.5 h", "more than a week".</summary>
     public static string Duration(double seconds)

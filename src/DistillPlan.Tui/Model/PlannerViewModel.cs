@@ -237,7 +237,8 @@ public sealed class PlannerViewModel
         if (Outcome.Plan is not Plan plan) return [first, "", notice ?? ""];
         string feasible = plan.Feasible ? "" : "NOT FEASIBLE: see the conflict | ";
         // Checks first, charge last: on a narrow screen the long mixture description is what gets cut.
-        return [first, $"{feasible}{SeverityText.Summary(plan.Checks)} | set by {plan.LimitingConstraint} | {plan.Charge.Describe()}", notice ?? ""];
+        return [first, $"{feasible}{SeverityText.Summary(plan.Checks)} | set by {plan.LimitingConstraint} | {plan.Charge.Describe()}",
+            notice ?? (plan.Scale is Core.Scale.PlanScale scale ? ReadoutLine.Scale(scale, plan.AtAtmosphericPressure, width) : "")];
     }
 
     /// <summary>The plan pane: the plan's report rendered by the same text renderer as the CLI, at the pane's width.</summary>

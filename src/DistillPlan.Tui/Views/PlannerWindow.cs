@@ -25,6 +25,7 @@ public sealed class PlannerWindow : Window
     private readonly RampPane _ramp = new();
     private readonly HelpOverlay _help = new();
     private readonly FitOverlay _fit;
+    private readonly SwapOverlay _swap;
     private readonly View[] _panes;
     private readonly IPlannerDialogs _dialogs;
     private readonly RecentPlans _recent;
@@ -66,7 +67,8 @@ public sealed class PlannerWindow : Window
         };
         _fit = new FitOverlay(new FitFormModel(userLibraryPath ?? Core.Library.SolventLibrary.DefaultUserPath), () => _vm.Unit);
         _fit.Added += vm.UseLibrary;
-        Add(_readout, _tabs, bar, _help, _fit);
+        _swap = new SwapOverlay(new SwapFormModel(() => _vm.Document, () => _vm.Library), () => _vm.Display);
+        Add(_readout, _tabs, bar, _help, _fit, _swap);
 
         LastMessage = vm.LibraryProblem;
         KeyDown += (_, key) => { if (Handle(key)) key.Handled = true; };
@@ -107,6 +109,7 @@ public sealed class PlannerWindow : Window
     private bool Handle(Key key)
     {
         if (key == KeyMap.Fit) { ToggleFit(); return true; }
+        if (key == KeyMap.Swap) { ToggleSwap(); return true; }
         if (key == KeyMap.Help) { ToggleHelp(); return true; }
         if (key == KeyMap.Back) { Back(); return true; }
         int pane = Array.FindIndex(KeyMap.Panes, k => k == key);
@@ -124,6 +127,7 @@ public sealed class PlannerWindow : Window
     private void Back()
     {
         if (_fit.Visible) { ToggleFit(); return; }
+        if (_swap.Visible) { ToggleSwap(); return; }
         if (_help.Visible) { ToggleHelp(); return; }
         ShowPane(_charge);
     }
@@ -141,6 +145,7 @@ public sealed class PlannerWindow : Window
         NoFocusOnTabHeaders();
         _help.Visible = false;
         _fit.Visible = false;
+        _swap.Visible = false;
         _tabs.Value = pane;
         if (pane == _charge) FocusSearch();
         else pane.SetFocus();
@@ -149,14 +154,26 @@ public sealed class PlannerWindow : Window
     private void ToggleHelp()
     {
         _fit.Visible = false;
+        _swap.Visible = false;
         _help.Visible = !_help.Visible;
         if (_help.Visible) _help.SetFocus(); else CurrentPane.SetFocus();
         SetNeedsDraw();
     }
 
+    private void ToggleSwap()
+    {
+        _help.Visible = false;
+        _fit.Visible = false;
+        if (_swap.Visible) { _swap.Visible = false; CurrentPane.SetFocus(); } else _swap.Open();
+        SetNeedsDraw();
+    }
+
+    internal SwapOverlay Swap => _swap;
+
     private void ToggleFit()
     {
         _help.Visible = false;
+        _swap.Visible = false;
         if (_fit.Visible) { _fit.Visible = false; CurrentPane.SetFocus(); } else _fit.Open();
         SetNeedsDraw();
     }

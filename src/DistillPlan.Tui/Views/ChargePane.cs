@@ -39,6 +39,7 @@ internal sealed class ChargePane : View
 
         var find = new Label { X = 0, Y = 0, Width = 16 };
         _search = new TextField { X = Pos.Right(find), Y = 0, Width = 22 };
+        EntryLimit.Attach(_search, EntryLimit.Search);
         FocusMark.Attach(_search, find, "Find solvent:");
         var how = new Label { Text = "Enter use  Ctrl+A add  Down list", X = Pos.Right(_search) + 1, Y = 0, Width = Dim.Fill() };
         var listCaption = new Label { X = 0, Y = 1, Width = 13 };

@@ -20,6 +20,7 @@ internal sealed class Field
         Entry = new TextField { X = Pos.Right(Caption), Y = Pos.Top(Caption), Width = entryWidth };
         Hint = new Label { X = Pos.Right(Entry) + 1, Y = Pos.Top(Caption), Width = Dim.Fill() };
         FocusMark.Attach(Entry, Caption, caption);
+        EntryLimit.Attach(Entry, EntryLimit.Field, message => Hint.Text = message);
         Entry.TextChanged += (_, _) => { if (!_showing) changed(Entry.Text); };
         parent.Add(Caption, Entry, Hint);
     }

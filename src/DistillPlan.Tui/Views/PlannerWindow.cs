@@ -181,6 +181,14 @@ public sealed class PlannerWindow : Window
     private void ShowAll()
     {
         _readout.Show(_vm, LastMessage);
+        // While a plan computes, the panes keep the last good plan: only the readout says so.
+        // Refreshing every pane on every keystroke (hints, report, curve, ramp) made a paste of
+        // thousands of characters take minutes; the panes refresh once the new plan arrives.
+        if (_vm.IsComputing)
+        {
+            SetNeedsDraw();
+            return;
+        }
         _charge.Refresh();
         _equipment.Refresh();
         _plan.Show(_vm);

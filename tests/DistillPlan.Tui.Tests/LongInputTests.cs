@@ -32,3 +32,31 @@ public sealed class LongInputTests
         Assert.True(((Terminal.Gui.Views.TextField)h.Window.Charge.SearchField).Text.Length <= Views.EntryLimit.Search);
     }
 }
+
+/// <summary>Issue 13: a plan file with close to a megabyte of notes froze the text UI for minutes (the notes view and a list filled line by line).</summary>
+[Collection(TerminalCollection.Name)]
+public sealed class LongNotesTests
+{
+    [Fact]
+    public void A_plan_with_huge_notes_opens_keeps_the_notes_and_shows_them_read_only()
+    {
+        string dir = Directory.CreateTempSubdirectory("dp-notes-").FullName;
+        try
+        {
+            string line = "Line of notes about the batch, with some words and a number 42.";
+            var notes = string.Join("\n", Enumerable.Repeat(line, 12_000));
+            string path = Path.Combine(dir, "big.yaml");
+            File.WriteAllText(path, "format: distillplan-plan/1\ntitle: \"big\"\nnotes: |-\n"
+                + string.Concat(notes.Split('\n').Select(l => "  " + l + "\n")) + "charge:\n  solvents: \"ethanol\"\n");
+            var vm = new PlannerViewModel(TestLibrary.Library);
+            vm.Open(path);
+            using var h = new PlannerHarness(vm: vm);
+            string screen = h.Screen();
+            Assert.Contains("Bath 60.0 °C", screen);
+            Assert.Equal(notes, vm.Document.Notes);
+            Assert.False(vm.IsDirty);
+            Assert.True(vm.Document.Notes.Length > Views.ChargePane.NotesEditLimit);
+        }
+        finally { Directory.Delete(dir, recursive: true); }
+    }
+}

@@ -64,7 +64,12 @@ internal sealed class ChargePane : View
         var notesCaption = new Label { X = 0, Y = Pos.Bottom(_title.Caption), Width = 16 };
         _notes = new TextView { X = Pos.Right(notesCaption), Y = Pos.Top(notesCaption), Width = Dim.Fill(), Height = Dim.Fill(), TabKeyAddsTab = false, WordWrap = true };
         FocusMark.Attach(_notes, notesCaption, "Notes:");
-        _notes.ContentsChanged += (_, _) => { if (!_showingNotes) vm.SetNotes(_notes.Text); };
+        _notes.ContentsChanged += (_, _) =>
+        {
+            if (_showingNotes || _notes.ReadOnly) return;
+            vm.SetNotes(_notes.Text);
+            _notesShownFor = vm.Document.Notes;
+        };
         Add(notesCaption, _notes);
 
         _search.TextChanged += (_, _) => ShowMatches();
@@ -89,13 +94,31 @@ internal sealed class ChargePane : View
             field.Hint.Text = _vm.DefaultFor(key);
         }
         _title.Show(d.Title);
+        ShowNotes(d.Notes);
+    }
+
+    /// <summary>
+    /// Notes longer than this are shown read-only, the start of them only: Terminal.Gui's wrapping
+    /// text view takes minutes over a megabyte of text. The notes stay in the plan as they are.
+    /// </summary>
+    public const int NotesEditLimit = 20_000;
+
+    private string? _notesShownFor;
+
+    private void ShowNotes(string notes)
+    {
+        if (ReferenceEquals(notes, _notesShownFor) || notes == _notesShownFor) return;
+        bool tooLong = notes.Length > NotesEditLimit;
         // The view's text ends lines its own way; compare as the document keeps notes.
-        if (_notes.Text.ReplaceLineEndings("\n").TrimEnd() != d.Notes)
-        {
-            _showingNotes = true;
-            try { _notes.Text = d.Notes; }
-            finally { _showingNotes = false; }
-        }
+        string shown = tooLong
+            ? notes[..2000] + $"\n\n… {notes.Length} characters in all: too long to edit here, kept as they are in the plan file; edit them in a text editor."
+            : notes;
+        _notesShownFor = notes;
+        _notes.ReadOnly = tooLong;
+        if (!tooLong && _notes.Text.ReplaceLineEndings("\n").TrimEnd() == notes) return;
+        _showingNotes = true;
+        try { _notes.Text = shown; }
+        finally { _showingNotes = false; }
     }
 
     /// <summary>The charge entry (tests read its cursor).</summary>

@@ -14,7 +14,7 @@ internal sealed class PlanPane : View
 {
     private readonly Label _caption = new() { X = 0, Y = 0, Width = Dim.Fill() };
     private readonly ListView _lines = new() { X = 0, Y = 1, Width = Dim.Fill(), Height = Dim.Fill() };
-    private readonly ObservableCollection<string> _items = [];
+    private ObservableCollection<string> _items = [];
     private PlannerViewModel? _vm;
 
     public PlanPane()
@@ -38,17 +38,22 @@ internal sealed class PlanPane : View
         Rewrap();
     }
 
-    private int _wrappedAt = -1;
+    private object? _wrappedFor;
 
     private void Rewrap()
     {
         if (_vm is null) return;
         int width = _lines.Viewport.Width > 0 ? _lines.Viewport.Width - 1 : 78;
+        // Scrolling changes the viewport too: lay out again only for a new plan, state or width.
+        var key = (width, _vm.Outcome, _vm.Error, _vm.IsComputing, _vm.Unit, _vm.Document.Title, _vm.Document.Notes);
+        if (Equals(key, _wrappedFor)) return;
+        _wrappedFor = key;
         // The report is laid out at the pane's width by the same renderer as the CLI.
         var lines = _vm.PlanReport(width).TrimEnd('\n').Split('\n');
-        if (width == _wrappedAt && lines.SequenceEqual(_items)) return;
-        _wrappedAt = width;
-        _items.Clear();
-        foreach (var l in lines) _items.Add(l);
+        if (lines.SequenceEqual(_items)) return;
+        // One new source, not an Add per line: the list redoes its layout on every change, which
+        // made a report with long notes (thousands of lines) take minutes.
+        _items = new ObservableCollection<string>(lines);
+        _lines.SetSource(_items);
     }
 }

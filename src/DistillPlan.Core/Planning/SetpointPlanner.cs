@@ -94,7 +94,7 @@ public static partial class SetpointPlanner
         // temperature at the setpoint, with the capture margin (docs/methods.md, Condenser capture).
         if (mixture is not null) condenserMax = Temperature.Min(condenserMax, CondensateCapture.CondenserLimit(system, setpoint, bubble.Vapor) ?? condenserMax);
 
-        var notes0 = new List<Finding>();
+        var notes = new List<Finding>();
         // The size side (docs/methods.md, Heat and time): the condenser may hold the bath below the ΔT rule's.
         var sizing = ScaleSetup.Resolve(charge, equipment, out string? sizeUnknown);
         HeatState? heat = null;
@@ -102,11 +102,10 @@ public static partial class SetpointPlanner
         if (sizing is not null)
         {
             var ruleBath = bath;
-            bath = ScalePlanner.CondenserLimitedBath(sizing, system, bubble.Vapor, vapor, bath, setpoint, equipment.Coolant, out var state);
+            bath = ScalePlanner.CondenserLimitedBath(sizing, system, bubble.Vapor, vapor, bath, setpoint, equipment.Coolant, out var state, out var full);
             heat = state;
             if (bath < ruleBath)
             {
-                var full = HeatBalance.At(sizing, system, bubble.Vapor, sizing.ChargeM3, vapor, ruleBath, setpoint, equipment.Coolant);
                 bool tooSmall = state.HeatDutyW > state.CondenserCapacityW;
                 scaleNotes.Add(tooSmall
                     ? Make("condenser-capacity", Severity.Warning, "too-small", ["condenser-area", "condenser-capacity", "coolant-temp"],
@@ -118,7 +117,7 @@ public static partial class SetpointPlanner
             scaleNotes.AddRange(FillLevel(sizing, equipment));
         }
         else if (sizeUnknown is not null)
-            notes0.Add(Make("scale", Severity.Info, "not-computed", ["flask", "vessel"], W("reason", sizeUnknown)));
+            notes.Add(Make("scale", Severity.Info, "not-computed", ["flask", "vessel"], W("reason", sizeUnknown)));
 
         var survey = mixture?.Azeotropes(setpoint.Pascal) ?? AzeotropeSurvey.None;
         var context = new CheckContext(system, x, equipment, rules, vapor, bath, setpoint, condenserMax, bubble.Vapor,
@@ -130,7 +129,6 @@ public static partial class SetpointPlanner
             checks.Add(CondensateCapture.ColderCoolantFinding(system, equipment.Coolant, setpoint, vapor, bubble.Vapor));
         checks = [.. checks.OrderByDescending(f => f.Severity)];
 
-        var notes = notes0;
         if (system.ModelNote is string note) notes.Add(Make("model", Severity.Info, "", ["model"], W("note", note)));
         if (mixture?.ApproximationNote is string approximate) notes.Add(Make("model", Severity.Info, "approximate", ["model"], W("note", approximate)));
         foreach (var published in survey.PublishedNotes) notes.Add(Make("published-azeotrope", Severity.Info, "", ["model"], W("note", published)));
@@ -231,7 +229,7 @@ public static partial class SetpointPlanner
         static Reports.Quantity L(double m3) => Reports.Quantity.Number(m3 * 1e3, "L");
         if (!s.Vessel && s.ChargeM3 > 0.5 * s.ContainerM3 * (1 + 1e-9))
             yield return Make("fill-level", Severity.Caution, "flask", ["flask"], ("charge", L(s.ChargeM3)), ("share", Reports.Quantity.Percent(s.ChargeM3 / s.ContainerM3)),
-                ("flask", L(s.ContainerM3)), ("needed", L(Scale.FlaskGeometry.UsualSizesM3.FirstOrDefault(v => s.ChargeM3 <= 0.5 * v, 2 * s.ChargeM3))));
+                ("flask", L(s.ContainerM3)), ("needed", L(FlaskGeometry.SmallestHolding(s.ChargeM3) ?? 2 * s.ChargeM3)));
         if (s.Vessel && s.ChargeM3 < s.MinimumM3 * (1 - 1e-9))
             yield return Make("fill-level", Severity.Warning, "below-minimum", ["min-volume", "vessel"], ("charge", L(s.ChargeM3)), ("minimum", L(s.MinimumM3)));
     }

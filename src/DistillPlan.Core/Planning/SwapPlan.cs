@@ -17,6 +17,8 @@ namespace DistillPlan.Core.Planning;
 public sealed record SwapStepPlan(IReadOnlyDictionary<string, double> Liquid, Temperature Vapor, Pressure Pressure, double VolumeL,
     double NewSolventL, double DistillateL, double ResidualMassFraction, double? TimeS, int Cycle)
 {
+    /// <summary>Vapour mole fractions leaving the pot here, by name.</summary>
+    public IReadOnlyDictionary<string, double> VaporComposition { get; init; } = new Dictionary<string, double>();
     /// <summary>The heat and gas balance here (duty, rate, condenser and pump load).</summary>
     public HeatState? Heat { get; init; }
 }

@@ -49,7 +49,7 @@ public static class SwapPlanner
         double minimum = sizing.MinimumM3 > 0 ? sizing.MinimumM3 : FlaskMinimumShare * sizing.ContainerM3;
         double maximum = Math.Max(sizing.MaximumM3, sizing.ChargeM3);
         if (minimum >= maximum)
-            throw new InputException("--min-volume", L(minimum), $"a minimum volume below the highest fill ({L(maximum)})");
+            throw new InputException("--min-volume", ScaleUnits.Litres(minimum), $"a minimum volume below the highest fill ({ScaleUnits.Litres(maximum)})");
 
         var equipment = plan.Equipment;
         var hold = SetpointPlanner.PumpHold(equipment, plan.Rules);
@@ -100,18 +100,11 @@ public static class SwapPlanner
         };
 
         double heatUp = scale.HeatUp.NotEvaluatedReason is null ? scale.HeatUp.TimeS : 0;
-        var methods = (method is SwapMethod only ? [only] : new[] { SwapMethod.ConstantVolume, SwapMethod.PutAndTake })
-            .Select(m => Describe(SolventSwap.Run(problem, m), problem, solvents, MassResidual, MoleResidual, heatUp)).ToList();
         // Each reported step with its heat and gas balance, for the condenser and the pump.
-        methods = methods.Select(m => m with
-        {
-            Steps = m.Steps.Select(st =>
-            {
-                var x = solvents.Select(s => st.Liquid[s.Name]).ToArray();
-                var y = system.BubblePressure(st.Vapor.Kelvin, x).Vapor;
-                return st with { Heat = HeatBalance.At(sizing, system, y, st.VolumeL / 1e3, st.Vapor, BathFor(st.Vapor.Kelvin), st.Pressure, equipment.Coolant) };
-            }).ToList(),
-        }).ToList();
+        HeatState HeatAt(SwapPoint pt) => HeatBalance.At(sizing, system, pt.Boil.Vapor, SolventSwap.Volume(problem, pt.Moles),
+            Temperature.FromKelvin(pt.Boil.TemperatureK), BathFor(pt.Boil.TemperatureK), Pressure.FromPascal(pt.Boil.PressurePa), equipment.Coolant);
+        var methods = (method is SwapMethod only ? [only] : new[] { SwapMethod.ConstantVolume, SwapMethod.PutAndTake })
+            .Select(m => Describe(SolventSwap.Run(problem, m), problem, solvents, MassResidual, MoleResidual, heatUp, HeatAt)).ToList();
         var (recommended, reason) = Recommend(methods, newSolvent.Name);
 
         var findings = Checks(plan, sizing, system, solvents, methods, b, hottest);
@@ -126,14 +119,18 @@ public static class SwapPlanner
     }
 
     private static SwapMethodPlan Describe(SwapRun run, SwapProblem p, IReadOnlyList<Solvent> solvents,
-        Func<double[], double> massResidual, Func<double[], double> moleResidual, double heatUpS)
+        Func<double[], double> massResidual, Func<double[], double> moleResidual, double heatUpS, Func<SwapPoint, HeatState> heatAt)
     {
         double Litres(double[] n) => SolventSwap.Volume(p, n) * 1e3;
         var steps = run.Points.Select(pt => new SwapStepPlan(
             solvents.Select((s, i) => (s.Name, x: pt.Moles[i] / pt.Moles.Sum())).ToDictionary(t => t.Name, t => t.x),
             Temperature.FromKelvin(pt.Boil.TemperatureK), Pressure.FromPascal(pt.Boil.PressurePa), Litres(pt.Moles),
             pt.NewSolventMol * p.MolarVolumeM3[p.NewSolvent] * 1e3, Litres(pt.DistillateMol), massResidual(pt.Moles),
-            double.IsNaN(pt.TimeS) ? null : heatUpS + pt.TimeS, pt.Cycle)).ToList();
+            double.IsNaN(pt.TimeS) ? null : heatUpS + pt.TimeS, pt.Cycle)
+        {
+            VaporComposition = solvents.Select((s, i) => (s.Name, y: pt.Boil.Vapor[i])).ToDictionary(t => t.Name, t => t.y),
+            Heat = heatAt(pt),
+        }).ToList();
         var last = run.Last;
         return new SwapMethodPlan
         {
@@ -197,9 +194,7 @@ public static class SwapPlanner
             if (m.TwoLiquidsAt is double litres)
                 found.Add(Make("swap", Severity.Caution, "two-liquids", ["to"], W("method", m.Name), N("added", litres, "L"), W("solvent", names[b])));
             var end = m.Steps[^1];
-            double[] x = names.Select(n => end.Liquid[n]).ToArray();
-            var y = system.BubblePressure(end.Vapor.Kelvin, x).Vapor;
-            double xOld = 1 - x[b], yOld = 1 - y[b];
+            double xOld = 1 - end.Liquid[names[b]], yOld = 1 - end.VaporComposition[names[b]];
             if (xOld > 1e-9 && yOld < xOld)
                 found.Add(Make("swap", Severity.Caution, "dilution-only", ["to"], W("method", m.Name), W("solvent", names[b]),
                     X("liquid", xOld), X("vapor", yOld)));
@@ -210,6 +205,5 @@ public static class SwapPlanner
         return found.GroupBy(f => f.Identity).Select(g => g.MaxBy(f => f.Severity)!).OrderByDescending(f => f.Severity).ToList();
     }
 
-    private static string L(double m3) => (m3 * 1e3).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture) + " L";
     private static string Num(double v) => Reports.DisplayFormat.Number(v);
 }

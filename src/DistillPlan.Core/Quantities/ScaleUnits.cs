@@ -77,6 +77,9 @@ public static class ScaleUnits
         return kgPerS is double v && v > 0 && v <= 1000.0 / 3600 ? v : throw new InputException(field, text, allowed);
     }
 
+    /// <summary>A volume [m³] as people write it in a message: litres, "250 L", "0.5 L".</summary>
+    public static string Litres(double m3) => (m3 * 1e3).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture) + " L";
+
     /// <summary>A leak throughput [Pa·m³/s] as a mass flow of air [kg/s] at 20 °C (ideal gas).</summary>
     public static double ThroughputToKgPerS(double paM3PerS) =>
         paM3PerS / (PhysicalConstants.GasConstant * 293.15) * PhysicalConstants.AirMolarMassGPerMol / 1000;

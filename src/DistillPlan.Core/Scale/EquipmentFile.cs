@@ -51,14 +51,23 @@ public static class EquipmentFile
                 : $"a unit of {path}: {string.Join(", ", units.Select(u => u.Name))}");
     }
 
-    /// <summary>Reads and validates a file.</summary>
+    /// <summary>Reads and validates a file (again only when it has changed since the last read).</summary>
     public static IReadOnlyList<EquipmentUnit> Load(string path)
     {
         if (!File.Exists(path))
             throw new InputException("--equipment", path, "an equipment file that exists (" + DefaultPath + ", or --equipment-file FILE)");
+        // Every settings read looks the unit up, and the text UI reads the settings for each field's
+        // hint: read and validate the file once per version of it, not once per field.
+        var info = new FileInfo(path);
+        var stamp = (info.LastWriteTimeUtc, info.Length);
+        if (Cache.TryGetValue(info.FullName, out var known) && known.Stamp == stamp) return known.Units;
         string text = YamlFileReader.ReadText(path, MaxFileBytes, (line, field, problem) => new LibraryFormatException(path, line, field, problem));
-        return Parse(text, path);
+        var units = Parse(text, path);
+        Cache[info.FullName] = (stamp, units);
+        return units;
     }
+
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, ((DateTime, long) Stamp, IReadOnlyList<EquipmentUnit> Units)> Cache = new();
 
     /// <summary>Largest file read (a few hundred units fit in far less).</summary>
     public const int MaxFileBytes = 1 << 20;

@@ -30,7 +30,7 @@ public sealed record HeatUp(double TimeS, double EnergyJ, string? NotEvaluatedRe
         var estimated = new List<string>();
         foreach (var component in charge.Components)
         {
-            double? tabulated = MolarHeatCapacity(component.Solvent, mean);
+            double? tabulated = component.Solvent.LiquidHeatCapacityJPerMolK(mean); // DIPPR-100, Perry Table 2-153
             if (tabulated is null) estimated.Add(component.Solvent.Name);
             double cp = tabulated ?? TypicalOrganicCpJPerGK * component.Solvent.MolarMassGPerMol;
             c += component.Moles * setup.MolesScale * cp;
@@ -40,7 +40,4 @@ public sealed record HeatUp(double TimeS, double EnergyJ, string? NotEvaluatedRe
         if (bath.Kelvin <= boil || ua <= 0) return new HeatUp(double.PositiveInfinity, energy, null) { EstimatedCpFor = estimated };
         return new HeatUp(c / ua * Math.Log((bath.Kelvin - start) / (bath.Kelvin - boil)), energy, null) { EstimatedCpFor = estimated };
     }
-
-    /// <summary>Liquid Cp [J/(mol·K)] from the library (DIPPR-100, Perry Table 2-153), or null.</summary>
-    private static double? MolarHeatCapacity(Solvent s, double temperatureK) => s.LiquidHeatCapacityJPerMolK(temperatureK);
 }

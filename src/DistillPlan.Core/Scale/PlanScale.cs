@@ -18,8 +18,6 @@ public sealed record PlanScale
     public string EndText { get; init; } = "";
     /// <summary>The bath step the plan holds when the condenser made it lower than the ΔT rule's, else null.</summary>
     public TemperatureDifference? LoweredBathStep { get; init; }
-    /// <summary>The bath step the condenser's capacity allows (the lowered step, when lowered).</summary>
-    public TemperatureDifference? CondenserBathStep { get; init; }
     /// <summary>Heat-up plus evaporation [s] (evaporation alone when the heat-up could not be worked out); null when not worked out.</summary>
     public double? TotalTimeS => EvaporationTimeS is double e ? (HeatUp.NotEvaluatedReason is null ? HeatUp.TimeS : 0) + e : null;
     /// <summary>Heat-up energy plus latent heat over the evaporation [J], when known.</summary>
@@ -42,11 +40,12 @@ public static class ScalePlanner
     /// <summary>
     /// The bath temperature the condenser allows at the setpoint: the ΔT rule's bath, or lower
     /// so that U·A·ΔT stays within <see cref="CondenserLoadTarget"/> of the condenser's capacity.
+    /// <paramref name="state"/> is the balance at the bath returned, <paramref name="atRuleBath"/> at the rule's.
     /// </summary>
     public static Temperature CondenserLimitedBath(ScaleSetup setup, IBoilingSystem system, double[] vapor, Temperature boiling,
-        Temperature bath, Pressure pressure, Temperature coolant, out HeatState state)
+        Temperature bath, Pressure pressure, Temperature coolant, out HeatState state, out HeatState atRuleBath)
     {
-        state = HeatBalance.At(setup, system, vapor, setup.ChargeM3, boiling, bath, pressure, coolant);
+        state = atRuleBath = HeatBalance.At(setup, system, vapor, setup.ChargeM3, boiling, bath, pressure, coolant);
         if (state.HeatDutyW <= state.CondenserCapacityW || state.CondenserCapacityW <= 0 || state.AreaM2 <= 0) return bath;
         double step = Math.Max(SmallestBathStepK, CondenserLoadTarget * state.CondenserCapacityW / (setup.UWPerM2K * state.AreaM2));
         if (step >= bath.Kelvin - boiling.Kelvin) return bath;

@@ -98,13 +98,9 @@ public sealed record ScaleSetup
         else if (e.NominalVolumeM3 is double given)
         {
             if (volume > given * (1 + 1e-9))
-                throw new InputException(e.IsVessel ? "--vessel" : "--flask", Litres(given),
-                    $"a {(e.IsVessel ? "vessel" : "flask")} that holds the charge ({Litres(volume)})");
+                throw new InputException(e.IsVessel ? "--vessel" : "--flask", ScaleUnits.Litres(given),
+                    $"a {(e.IsVessel ? "vessel" : "flask")} that holds the charge ({ScaleUnits.Litres(volume)})");
             container = given;
-        }
-        else if (e.IsVessel)
-        {
-            container = volume; // unreachable: a vessel always has a size
         }
         else if (FlaskGeometry.SmallestHolding(volume) is double flask)
         {
@@ -114,7 +110,7 @@ public sealed record ScaleSetup
         }
         else
         {
-            reason = $"the charge ({Litres(volume)}) is more than a 20 L flask holds half full; give --vessel for a jacketed vessel (or --flask)";
+            reason = $"the charge ({ScaleUnits.Litres(volume)}) is more than a 20 L flask holds half full; give --vessel for a jacketed vessel (or --flask)";
             return null;
         }
 
@@ -170,6 +166,4 @@ public sealed record ScaleSetup
     public static double LeakKgPerS(Equipment e, double containerM3) => e.LeakAirKgPerS ?? (e.IsVessel
         ? Math.Max(0.5, ScaleRules.VesselLeakPerM3KgPerH * Math.Pow(containerM3, 2.0 / 3)) / 3600
         : ScaleUnits.ThroughputToKgPerS(ScaleRules.GlasswareLeakPaM3PerS));
-
-    private static string Litres(double m3) => (m3 * 1e3).ToString("0.###", System.Globalization.CultureInfo.InvariantCulture) + " L";
 }

@@ -12,28 +12,21 @@ namespace DistillPlan.Tui.Views;
 /// never touched): name, molar mass, points and form, the fit refreshed on every edit in the same
 /// text as <c>distillplan fit</c>, and a button that adds the compound to the user's library.
 /// </summary>
-internal sealed class FitOverlay : FrameView
+internal sealed class FitOverlay : Overlay
 {
     private readonly FitFormModel _model;
     private readonly ListView _lines;
-    private readonly ObservableCollection<string> _items = [];
+    private ObservableCollection<string> _items = [];
     private readonly Field _name;
     private string? _message;
 
     /// <summary>Called with the reloaded library after a compound was added.</summary>
     public event Action<SolventLibrary>? Added;
 
-    public FitOverlay(FitFormModel model, Func<Core.Quantities.PressureUnit> unit)
+    public FitOverlay(FitFormModel model, Func<Core.Quantities.PressureUnit> unit) : base($"Fit your own compound ({KeyMap.FitKeyText} or Esc closes)")
     {
         _model = model;
         _unit = unit;
-        Title = $"Fit your own compound ({KeyMap.FitKeyText} or Esc closes)";
-        X = 0;
-        Y = 0;
-        Width = Dim.Fill();
-        Height = Dim.Fill(1);
-        Visible = false;
-        CanFocus = true;
 
         _name = new Field(this, null, "Name:", 12, 30, t => Edit(() => _model.Name = t));
         _name.Hint.Text = "as it will appear in the library";
@@ -85,10 +78,10 @@ internal sealed class FitOverlay : FrameView
     {
         // Wrapped at the list's width: an error line must be read whole.
         int width = Math.Max(20, _lines.Viewport.Width > 0 ? _lines.Viewport.Width : 78);
-        _items.Clear();
         var lines = _message is null ? _model.Lines(_unit()) : [_message, "", .. _model.Lines(_unit())];
-        foreach (string line in lines)
-            foreach (string l in line.Length == 0 ? [""] : LineWrap.Wrap(line, width, hanging: 2)) _items.Add(l);
+        // One new source, not an Add per line (the list lays itself out again on every change).
+        _items = new ObservableCollection<string>(lines.SelectMany(line => line.Length == 0 ? [""] : LineWrap.Wrap(line, width, hanging: 2)));
+        _lines.SetSource(_items);
         SetNeedsDraw();
     }
 }

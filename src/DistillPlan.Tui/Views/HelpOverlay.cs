@@ -7,18 +7,11 @@ namespace DistillPlan.Tui.Views;
 /// Key help drawn over the panes rather than as a modal window, so it never blocks the plan
 /// underneath and closes with the same key that opened it.
 /// </summary>
-internal sealed class HelpOverlay : FrameView
+internal sealed class HelpOverlay : Overlay
 {
-    public HelpOverlay()
+    // The list scrolls when the terminal is short.
+    public HelpOverlay() : base("Keys (F1 or Esc closes)")
     {
-        Title = "Keys (F1 or Esc closes)";
-        // The whole pane area, so the title is always on screen; the list scrolls when the terminal is short.
-        X = 0;
-        Y = 0;
-        Width = Dim.Fill();
-        Height = Dim.Fill(1);
-        Visible = false;
-        CanFocus = true;
         int pad = KeyMap.All.Max(k => k.KeyText.Length);
         var lines = KeyMap.All.Select(k => k.KeyText.PadRight(pad) + " " + k.What);
         var list = new ListView { X = 0, Y = 0, Width = Dim.Fill(), Height = Dim.Fill() };

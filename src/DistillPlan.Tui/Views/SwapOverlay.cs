@@ -12,25 +12,18 @@ namespace DistillPlan.Tui.Views;
 /// vessel and shows both methods compared, in the text of <c>distillplan swap</c>. A swap is
 /// planned on request only: it takes a fraction of a second, too long for every keystroke.
 /// </summary>
-internal sealed class SwapOverlay : FrameView
+internal sealed class SwapOverlay : Overlay
 {
     private readonly SwapFormModel _model;
     private readonly Func<Core.Reports.DisplayFormat> _format;
     private readonly ListView _lines;
-    private readonly ObservableCollection<string> _items = [];
+    private ObservableCollection<string> _items = [];
     private readonly Field _to;
 
-    public SwapOverlay(SwapFormModel model, Func<Core.Reports.DisplayFormat> format)
+    public SwapOverlay(SwapFormModel model, Func<Core.Reports.DisplayFormat> format) : base($"Solvent swap ({KeyMap.SwapKeyText} or Esc closes)")
     {
         _model = model;
         _format = format;
-        Title = $"Solvent swap ({KeyMap.SwapKeyText} or Esc closes)";
-        X = 0;
-        Y = 0;
-        Width = Dim.Fill();
-        Height = Dim.Fill(1);
-        Visible = false;
-        CanFocus = true;
 
         _to = new Field(this, null, "Swap to:", 12, 24, t => _model.To = t);
         _to.Hint.Text = "the new solvent (toluene, 2-MeTHF)";
@@ -70,8 +63,9 @@ internal sealed class SwapOverlay : FrameView
     private void Show()
     {
         int width = Math.Max(20, _lines.Viewport.Width > 0 ? _lines.Viewport.Width : 78);
-        _items.Clear();
-        foreach (string line in _model.Lines(_format(), width)) _items.Add(line);
+        // One new source, not an Add per line (the list lays itself out again on every change).
+        _items = new ObservableCollection<string>(_model.Lines(_format(), width));
+        _lines.SetSource(_items);
         SetNeedsDraw();
     }
 }

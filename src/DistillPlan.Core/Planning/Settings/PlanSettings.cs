@@ -336,7 +336,7 @@ public static class PlanSettings
     /// <summary>A vessel's volumes must nest: minimum below maximum, both within the working volume.</summary>
     private static void CheckVolumes(Equipment e)
     {
-        string L(double m3) => (m3 * 1e3).ToString("0.###", CultureInfo.InvariantCulture) + " L";
+        static string L(double m3) => ScaleUnits.Litres(m3);
         if (e.MinimumVolumeM3 is double min && e.MaximumVolumeM3 is double max && min >= max)
             throw new InputException("--min-volume", L(min), $"a minimum volume below the maximum fill ({L(max)})");
         if (e.NominalVolumeM3 is double v)

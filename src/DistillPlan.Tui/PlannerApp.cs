@@ -18,6 +18,7 @@ public static class PlannerApp
         var vm = new PlannerViewModel(library) { LibraryProblem = problem };
         if (args.Length > 0) vm.Open(args[0]);
 
+        TerminalGuiConfiguration.ApplyIfDeferred();
         using IApplication app = Application.Create();
         app.Init();
         // From here on plans are computed off the UI thread and handed back through the main loop.

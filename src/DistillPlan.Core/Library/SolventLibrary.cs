@@ -11,16 +11,19 @@ public sealed class SolventLibrary
     /// <summary>File name of the shipped library.</summary>
     public const string FileName = "solvents.yaml";
 
-    private readonly Dictionary<string, Solvent> _byKey;
+    private readonly IReadOnlyList<LibraryEntry> _entries;
+    private readonly Dictionary<string, LibraryEntry> _byKey;
+    private readonly Lazy<IReadOnlyList<Solvent>> _all;
 
-    private SolventLibrary(IReadOnlyList<Solvent> solvents, IReadOnlyDictionary<string, string> sources, IReadOnlyList<string> files)
+    private SolventLibrary(IReadOnlyList<LibraryEntry> entries, IReadOnlyDictionary<string, string> sources, IReadOnlyList<string> files)
     {
-        Solvents = solvents;
+        _entries = entries;
         Citations = sources;
         Files = files;
-        _byKey = new Dictionary<string, Solvent>(StringComparer.Ordinal);
-        foreach (var s in solvents)
-            foreach (string key in new[] { s.Name, s.Cas }.Concat(s.Aliases).Where(k => k.Length > 0))
+        _all = new(() => _entries.Select(e => e.Solvent).ToList(), LazyThreadSafetyMode.ExecutionAndPublication);
+        _byKey = new Dictionary<string, LibraryEntry>(StringComparer.Ordinal);
+        foreach (var s in entries)
+            foreach (string key in s.Keys)
             {
                 string k = Normalise(key);
                 if (_byKey.TryGetValue(k, out var other) && !ReferenceEquals(other, s))
@@ -36,15 +39,22 @@ public sealed class SolventLibrary
             }
     }
 
-    private static string OriginFile(Solvent s) => s.Origin[..Math.Max(0, s.Origin.LastIndexOf(':'))];
-    private static int OriginLine(Solvent s) => int.TryParse(s.Origin[(s.Origin.LastIndexOf(':') + 1)..], out int l) ? l : 0;
+    private static string OriginFile(LibraryEntry s) => s.Origin[..Math.Max(0, s.Origin.LastIndexOf(':'))];
+    private static int OriginLine(LibraryEntry s) => int.TryParse(s.Origin[(s.Origin.LastIndexOf(':') + 1)..], out int l) ? l : 0;
 
-    /// <summary>All solvents, shipped first, then the user's additions.</summary>
-    public IReadOnlyList<Solvent> Solvents { get; }
+    /// <summary>All solvents, shipped first, then the user's additions (reads every entry not read yet).</summary>
+    public IReadOnlyList<Solvent> Solvents => _all.Value;
     /// <summary>Full citation text by source key.</summary>
     public IReadOnlyDictionary<string, string> Citations { get; }
     /// <summary>The files the library was read from, in merge order.</summary>
     public IReadOnlyList<string> Files { get; }
+
+    /// <summary>
+    /// How many entries have been read so far. The shipped library is indexed by name, alias and
+    /// CAS number at load; an entry is parsed and validated when a lookup, search or list first
+    /// needs it, so a plan of one solvent reads one.
+    /// </summary>
+    public int EntriesRead => _entries.Count(e => e.IsRead);
 
     /// <summary>The citation for a source key, or the key itself when it is not defined.</summary>
     public string Cite(string sourceKey) => Citations.TryGetValue(sourceKey, out var c) ? c : sourceKey;
@@ -53,8 +63,26 @@ public sealed class SolventLibrary
     public static SolventLibrary Load(string path)
     {
         var file = SolventYamlLoader.Load(path);
-        return new SolventLibrary(file.Solvents, file.Sources, [path]);
+        return new SolventLibrary(Read(file.Solvents), file.Sources, [path]);
     }
+
+    /// <summary>
+    /// Reads one library file the way the shipped one is read: indexed by name, alias and CAS
+    /// number, each entry parsed and validated when first used, so a mistake in an entry is
+    /// reported (with its line) only when that entry is asked for.
+    /// </summary>
+    public static SolventLibrary LoadIndexed(string path)
+    {
+        var file = ReadIndexed(path);
+        return new SolventLibrary(file.Entries, file.Sources, [path]);
+    }
+
+    private static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries) ReadIndexed(string path) =>
+        SolventYamlLoader.ParseIndexed(
+            YamlFileReader.ReadText(path, SolventYamlLoader.MaxFileBytes, (line, field, problem) => new LibraryFormatException(path, line, field, problem)),
+            path);
+
+    private static List<LibraryEntry> Read(IEnumerable<Solvent> solvents) => solvents.Select(s => new LibraryEntry(s)).ToList();
 
     /// <summary>
     /// The shipped library merged with the user's: <paramref name="userPath"/> when given
@@ -64,16 +92,17 @@ public sealed class SolventLibrary
     {
         var (shipped, shippedPath) = ReadShipped();
         string? user = userPath ?? (File.Exists(DefaultUserPath) ? DefaultUserPath : null);
-        if (user is null) return new SolventLibrary(shipped.Solvents, shipped.Sources, [shippedPath]);
+        if (user is null) return new SolventLibrary(shipped.Entries, shipped.Sources, [shippedPath]);
         if (!File.Exists(user))
             throw new InputException("--library", user, "a readable solvents YAML file (docs/solvents-schema.md)");
 
+        // The user's own file is read whole, so a mistake anywhere in it is said at once.
         var mine = SolventYamlLoader.Load(user, shipped.Sources);
-        var merged = shipped.Solvents.ToList();
+        var merged = shipped.Entries.ToList();
         foreach (var s in mine.Solvents)
         {
             int i = merged.FindIndex(x => (s.Cas.Length > 0 && x.Cas == s.Cas) || Normalise(x.Name) == Normalise(s.Name));
-            if (i >= 0) merged[i] = s; else merged.Add(s);
+            if (i >= 0) merged[i] = new LibraryEntry(s); else merged.Add(new LibraryEntry(s));
         }
         return new SolventLibrary(merged, mine.Sources, [shippedPath, user]);
     }
@@ -82,7 +111,7 @@ public sealed class SolventLibrary
     public static SolventLibrary LoadShipped()
     {
         var (file, name) = ReadShipped();
-        return new SolventLibrary(file.Solvents, file.Sources, [name]);
+        return new SolventLibrary(file.Entries, file.Sources, [name]);
     }
 
     /// <summary>What <see cref="Files"/> names when the library built into the program answered.</summary>
@@ -92,13 +121,15 @@ public sealed class SolventLibrary
     // native binary needs no file beside it; a file found by FindShipped still wins.
     private const string BuiltInResource = "DistillPlan.Core.Library.solvents.yaml";
 
-    private static (LibraryFile File, string Name) ReadShipped()
+    // The shipped library is indexed, not read whole: LibraryTextIndex says why. Its entries are
+    // checked all together by the library's own tests (LibraryIntegrityTests).
+    private static ((IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries) File, string Name) ReadShipped()
     {
-        if (FindShipped() is string path) return (SolventYamlLoader.Load(path), path);
+        if (FindShipped() is string path) return (ReadIndexed(path), path);
         using var stream = typeof(SolventLibrary).Assembly.GetManifestResourceStream(BuiltInResource)
             ?? throw new LibraryFormatException(FileName, 0, "file", "the shipped solvent library is not built into this program and was not found next to it or above it");
         using var reader = new StreamReader(stream);
-        return (SolventYamlLoader.Parse(reader.ReadToEnd(), BuiltInName), BuiltInName);
+        return (SolventYamlLoader.ParseIndexed(reader.ReadToEnd(), BuiltInName), BuiltInName);
     }
 
     /// <summary>The per-user library file: $XDG_CONFIG_HOME/distillplan/solvents.yaml, else ~/.config/distillplan/solvents.yaml.</summary>
@@ -136,8 +167,11 @@ public sealed class SolventLibrary
         TryFind(nameAliasOrCas, out var s) ? s! : throw new UnknownSolventException(nameAliasOrCas, Suggest(nameAliasOrCas));
 
     /// <summary>The solvent for a name, alias or CAS number, when the library holds it.</summary>
-    public bool TryFind(string nameAliasOrCas, out Solvent? solvent) =>
-        _byKey.TryGetValue(Normalise(nameAliasOrCas), out solvent);
+    public bool TryFind(string nameAliasOrCas, out Solvent? solvent)
+    {
+        solvent = _byKey.TryGetValue(Normalise(nameAliasOrCas), out var entry) ? entry.Solvent : null;
+        return solvent is not null;
+    }
 
     /// <summary>
     /// Solvents whose name, alias or CAS contains the text (for type-to-search), best first:
@@ -147,23 +181,23 @@ public sealed class SolventLibrary
     {
         string q = Normalise(text);
         if (q.Length == 0) return Solvents;
-        return Solvents
+        return _entries
             .Select(s => (s, rank: Keys(s).Select(k => k == q ? 0 : k.StartsWith(q, StringComparison.Ordinal) ? 1 : k.Contains(q, StringComparison.Ordinal) ? 2 : 9).Min()))
-            .Where(t => t.rank < 9).OrderBy(t => t.rank).ThenBy(t => t.s.Name, StringComparer.Ordinal).Select(t => t.s).ToList();
+            .Where(t => t.rank < 9).OrderBy(t => t.rank).ThenBy(t => t.s.Name, StringComparer.Ordinal).Select(t => t.s.Solvent).ToList();
     }
 
     /// <summary>Up to <paramref name="count"/> library names nearest to a misspelt one (edit distance).</summary>
     public IReadOnlyList<string> Suggest(string text, int count = 3)
     {
         string q = Normalise(text);
-        return Solvents
+        return _entries
             .Select(s => (s.Name, d: Keys(s).Min(k => EditDistance(q, k) - (k.StartsWith(q, StringComparison.Ordinal) && q.Length >= 2 ? q.Length : 0))))
             .OrderBy(t => t.d).ThenBy(t => t.Name, StringComparer.Ordinal)
             .Where(t => t.d <= Math.Max(3, q.Length / 2))
             .Take(count).Select(t => t.Name).ToList();
     }
 
-    private static IEnumerable<string> Keys(Solvent s) => new[] { s.Name, s.Cas }.Concat(s.Aliases).Where(k => k.Length > 0).Select(Normalise);
+    private static IEnumerable<string> Keys(LibraryEntry s) => s.Keys.Select(Normalise);
 
     /// <summary>Lower case, with spaces, hyphens and underscores made the same.</summary>
     public static string Normalise(string name) =>

@@ -47,12 +47,7 @@ public static class SolventYamlLoader
 
         var root = new YamlCursor(rootNode, "", file);
         root.OnlyKeys("format", "sources", "solvents");
-        string format = root.Required("format").String();
-        if (format != FormatTag) throw root.Required("format").Error($"expected '{FormatTag}', got '{format}'");
-
-        var sources = new Dictionary<string, string>(knownSources ?? new Dictionary<string, string>());
-        if (root.Optional("sources") is { } src)
-            foreach (var (key, value) in src.Entries()) sources[key] = value.String();
+        var sources = ReadHeader(root, knownSources);
 
         var solvents = new List<Solvent>();
         // Within one file every name, alias and CAS number belongs to one entry: two entries
@@ -72,6 +67,47 @@ public static class SolventYamlLoader
             solvents.Add(s);
         }
         return new LibraryFile(sources, solvents);
+    }
+
+    // The format tag and the citations by key.
+    private static Dictionary<string, string> ReadHeader(YamlCursor root, IReadOnlyDictionary<string, string>? knownSources)
+    {
+        string format = root.Required("format").String();
+        if (format != FormatTag) throw root.Required("format").Error($"expected '{FormatTag}', got '{format}'");
+        var sources = new Dictionary<string, string>(knownSources ?? new Dictionary<string, string>());
+        if (root.Optional("sources") is { } src)
+            foreach (var (key, value) in src.Entries()) sources[key] = value.String();
+        return sources;
+    }
+
+    /// <summary>
+    /// The library's header and an entry per solvent, each read and validated when first used
+    /// (<see cref="LibraryTextIndex"/>); a file of another layout is read whole, as by <see cref="Parse"/>.
+    /// </summary>
+    internal static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries) ParseIndexed(string text, string file)
+    {
+        if (LibraryTextIndex.TryRead(text, file, ReadEntry) is { } indexed) return indexed;
+        var whole = Parse(text, file);
+        return (whole.Sources, whole.Solvents.Select(s => new LibraryEntry(s)).ToList());
+    }
+
+    /// <summary>The sources of a library's header (the text before its <c>solvents:</c> key); null when it is empty.</summary>
+    internal static IReadOnlyDictionary<string, string>? ParseHeader(string header, string file)
+    {
+        var node = YamlFileReader.Parse(header, (line, field, problem) => new LibraryFormatException(file, line, field, problem));
+        if (node is null) return null;
+        var root = new YamlCursor(node, "", file);
+        root.OnlyKeys("format", "sources");
+        return ReadHeader(root, null);
+    }
+
+    // One entry's lines, parsed with the blank lines above it so that YAML's line numbers are the file's.
+    private static Solvent ReadEntry(string entryText, string file, IReadOnlyDictionary<string, string> sources, int firstLine, int index)
+    {
+        var node = YamlFileReader.Parse(new string('\n', firstLine) + entryText, (line, field, problem) => new LibraryFormatException(file, line, field, problem));
+        if (node is not YamlSequenceNode { Children.Count: 1 } list)
+            throw new LibraryFormatException(file, firstLine + 1, $"solvents[{index}]", "expected one solvent entry");
+        return ReadSolvent(new YamlCursor(list.Children[0], $"solvents[{index}]", file), sources);
     }
 
     private static Solvent ReadSolvent(YamlCursor e, IReadOnlyDictionary<string, string> sources)

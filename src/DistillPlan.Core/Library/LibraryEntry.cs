@@ -1,0 +1,38 @@
+namespace DistillPlan.Core.Library;
+
+/// <summary>
+/// One solvent of a library: the names it is found by, where it is written, and the entry
+/// itself, which an indexed file reads and validates only when it is first used (a plan of
+/// one solvent reads one entry of 65).
+/// </summary>
+internal sealed class LibraryEntry
+{
+    private readonly Lazy<Solvent> _solvent;
+
+    /// <summary>An entry already read.</summary>
+    public LibraryEntry(Solvent solvent)
+        : this(solvent.Name, solvent.Cas, solvent.Aliases, solvent.Origin, () => solvent) { }
+
+    /// <summary>An entry read by <paramref name="read"/> on first use; a failure is kept and thrown on every use.</summary>
+    public LibraryEntry(string name, string cas, IReadOnlyList<string> aliases, string origin, Func<Solvent> read)
+    {
+        Name = name;
+        Cas = cas;
+        Aliases = aliases;
+        Origin = origin;
+        // The text UI plans on a background thread while the screen searches the library.
+        _solvent = new Lazy<Solvent>(read, LazyThreadSafetyMode.ExecutionAndPublication);
+    }
+
+    public string Name { get; }
+    public string Cas { get; }
+    public IReadOnlyList<string> Aliases { get; }
+    /// <summary>File and line of the entry, for messages.</summary>
+    public string Origin { get; }
+
+    public Solvent Solvent => _solvent.Value;
+    public bool IsRead => _solvent.IsValueCreated;
+
+    /// <summary>Name, CAS number and aliases, those that are not empty.</summary>
+    public IEnumerable<string> Keys => new[] { Name, Cas }.Concat(Aliases).Where(k => k.Length > 0);
+}

@@ -1,0 +1,164 @@
+namespace DistillPlan.Core.Library;
+
+/// <summary>
+/// Reads a library file as far as a lookup needs: the header (format, sources) and, for each
+/// entry of the <c>solvents</c> list, its lines, name, aliases and CAS number. Each entry's YAML
+/// is parsed and validated only when the entry is first used. Why: parsing and checking all 65
+/// shipped entries costs the native program about 60 ms, three times everything else a
+/// single-solvent plan does (docs/performance.md).
+/// <para>
+/// It works on lines and so accepts only the layout library files have: a column-0
+/// <c>solvents:</c> key last, then list items at one indentation. For anything else (and for
+/// any doubt about the names) it returns null and the caller parses the whole file, which gives
+/// the usual messages.
+/// </para>
+/// </summary>
+internal static class LibraryTextIndex
+{
+    /// <summary>The header's sources and an entry per list item, or null when the layout is not the simple one.</summary>
+    public static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries)? TryRead(
+        string text, string file, Func<string, string, IReadOnlyDictionary<string, string>, int, int, Solvent> readEntry)
+    {
+        var lines = Lines(text);
+        int list = lines.FindIndex(l => IsSolventsKey(l.Text));
+        if (list < 0) return null;
+        var items = ItemStarts(lines, list);
+        if (items is null) return null;
+
+        IReadOnlyDictionary<string, string> sources;
+        try
+        {
+            var header = SolventYamlLoader.ParseHeader(text[..lines[list].Start], file);
+            if (header is null) return null;
+            sources = header;
+        }
+        catch (LibraryFormatException) { return null; }   // the whole-file parse gives the same message with its context
+
+        var entries = new List<LibraryEntry>(items.Count);
+        var owners = new HashSet<string>(StringComparer.Ordinal);
+        for (int i = 0; i < items.Count; i++)
+        {
+            int first = items[i], end = i + 1 < items.Count ? items[i + 1] : lines.Count;
+            var keys = Keys(lines, first, end);
+            if (keys is null) return null;
+            // Two entries sharing a name: the whole-file parse says which, with both lines.
+            foreach (string k in new[] { keys.Value.Name, keys.Value.Cas }.Concat(keys.Value.Aliases).Where(k => k.Length > 0))
+                if (!owners.Add(SolventLibrary.Normalise(k))) return null;
+            int startChar = lines[first].Start, endChar = end < lines.Count ? lines[end].Start : text.Length;
+            string entryText = text[startChar..endChar];
+            int index = i, firstLine = first;
+            entries.Add(new LibraryEntry(keys.Value.Name, keys.Value.Cas, keys.Value.Aliases, $"{file}:{first + 1}",
+                () => readEntry(entryText, file, sources, firstLine, index)));
+        }
+        return (sources, entries);
+    }
+
+    private readonly record struct Line(int Start, string Text)
+    {
+        public int Indent => Text.Length - Text.TrimStart(' ').Length;
+        public bool IsBlankOrComment => Text.Trim().Length == 0 || Text.TrimStart().StartsWith('#');
+    }
+
+    private static List<Line> Lines(string text)
+    {
+        var lines = new List<Line>(text.Length / 40);
+        int start = 0;
+        while (start <= text.Length)
+        {
+            int nl = text.IndexOf('\n', start);
+            int end = nl < 0 ? text.Length : nl;
+            lines.Add(new Line(start, text[start..end].TrimEnd('\r')));
+            if (nl < 0) break;
+            start = nl + 1;
+        }
+        return lines;
+    }
+
+    private static bool IsSolventsKey(string line)
+    {
+        if (!line.StartsWith("solvents:", StringComparison.Ordinal)) return false;
+        string rest = line["solvents:".Length..].Trim();
+        return rest.Length == 0 || rest.StartsWith('#');
+    }
+
+    // The line numbers of the list items, or null when something other than items at one
+    // indentation (and their deeper lines, blanks and comments) follows the key.
+    private static List<int>? ItemStarts(List<Line> lines, int list)
+    {
+        var starts = new List<int>();
+        int itemIndent = -1;
+        for (int j = list + 1; j < lines.Count; j++)
+        {
+            var line = lines[j];
+            if (line.IsBlankOrComment) continue;
+            if (line.Text.TrimStart(' ').StartsWith('\t')) return null;
+            int indent = line.Indent;
+            bool dash = line.Text.Length > indent && line.Text[indent] == '-'
+                && (line.Text.Length == indent + 1 || line.Text[indent + 1] == ' ');
+            if (itemIndent < 0)
+            {
+                if (!dash) return null;
+                itemIndent = indent;
+            }
+            if (indent == itemIndent && dash) starts.Add(j);
+            else if (indent <= itemIndent) return null;
+        }
+        return starts;
+    }
+
+    // The entry's keys from its lines at the entry's key indentation, when they are written as
+    // plain one-line values (name: x, cas: x, aliases: [a, b]); null for anything else.
+    private static (string Name, string Cas, IReadOnlyList<string> Aliases)? Keys(List<Line> lines, int first, int end)
+    {
+        string? name = null, cas = null;
+        IReadOnlyList<string>? aliases = null;
+        int keyIndent = -1;
+        for (int j = first; j < end; j++)
+        {
+            var line = lines[j];
+            if (line.IsBlankOrComment) continue;
+            string text = line.Text;
+            int at = line.Indent;
+            if (j == first)
+            {
+                at++;   // past the dash
+                while (at < text.Length && text[at] == ' ') at++;
+                if (at == text.Length) continue;   // "-" alone: the keys start on the next line
+            }
+            if (keyIndent < 0) keyIndent = at;
+            if (at != keyIndent) continue;      // a deeper line: inside another field's value
+            string field = text[at..];
+            if (Value(field, "name") is { } n) { if (name is not null || !Plain(n)) return null; name = n; }
+            else if (Value(field, "cas") is { } c) { if (cas is not null || !Plain(c)) return null; cas = c; }
+            else if (Value(field, "aliases") is { } a)
+            {
+                if (aliases is not null) return null;
+                aliases = FlowList(a);
+                if (aliases is null) return null;
+            }
+            else continue;
+            // A key's value written over more lines is for the YAML parser to read.
+            if (j + 1 < end && !lines[j + 1].IsBlankOrComment && lines[j + 1].Indent > keyIndent) return null;
+        }
+        return name is null ? null : (name, cas ?? "", aliases ?? []);
+    }
+
+    private static string? Value(string field, string key) =>
+        field.StartsWith(key, StringComparison.Ordinal) && field.Length > key.Length + 1 && field[key.Length] == ':' && field[key.Length + 1] == ' '
+            ? field[(key.Length + 2)..].Trim()
+            : null;
+
+    // A plain YAML scalar that reads as the same text: no quotes, flow or block indicators, comment or key.
+    private static bool Plain(string v) =>
+        v.Length > 0 && "[]{}&*!|>'\"%@`#,?:-".IndexOf(v[0]) < 0 && !v.Contains(" #", StringComparison.Ordinal)
+        && !v.Contains(": ", StringComparison.Ordinal) && !v.EndsWith(':') && !v.Contains('\t');
+
+    private static IReadOnlyList<string>? FlowList(string v)
+    {
+        if (v.Length < 2 || v[0] != '[' || v[^1] != ']') return null;
+        string inner = v[1..^1];
+        if (inner.Trim().Length == 0) return [];
+        var items = inner.Split(',').Select(s => s.Trim()).ToList();
+        return items.All(s => Plain(s) && !s.Contains('[') && !s.Contains(']')) ? items : null;
+    }
+}

@@ -11,7 +11,10 @@ internal sealed class LibraryEntry
 
     /// <summary>An entry already read.</summary>
     public LibraryEntry(Solvent solvent)
-        : this(solvent.Name, solvent.Cas, solvent.Aliases, solvent.Origin, () => solvent) { }
+    {
+        (Name, Cas, Aliases, Origin) = (solvent.Name, solvent.Cas, solvent.Aliases, solvent.Origin);
+        _solvent = new Lazy<Solvent>(solvent);
+    }
 
     /// <summary>An entry read by <paramref name="read"/> on first use; a failure is kept and thrown on every use.</summary>
     public LibraryEntry(string name, string cas, IReadOnlyList<string> aliases, string origin, Func<Solvent> read)

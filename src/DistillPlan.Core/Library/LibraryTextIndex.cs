@@ -128,8 +128,8 @@ internal static class LibraryTextIndex
             if (keyIndent < 0) keyIndent = at;
             if (at != keyIndent) continue;      // a deeper line: inside another field's value
             string field = text[at..];
-            if (Value(field, "name") is { } n) { if (name is not null || !Plain(n)) return null; name = n; }
-            else if (Value(field, "cas") is { } c) { if (cas is not null || !Plain(c)) return null; cas = c; }
+            if (Value(field, "name") is { } n) { if (name is not null || Scalar(n) is not { } v) return null; name = v; }
+            else if (Value(field, "cas") is { } c) { if (cas is not null || Scalar(c) is not { } v) return null; cas = v; }
             else if (Value(field, "aliases") is { } a)
             {
                 if (aliases is not null) return null;
@@ -143,22 +143,47 @@ internal static class LibraryTextIndex
         return name is null ? null : (name, cas ?? "", aliases ?? []);
     }
 
-    private static string? Value(string field, string key) =>
-        field.StartsWith(key, StringComparison.Ordinal) && field.Length > key.Length + 1 && field[key.Length] == ':' && field[key.Length + 1] == ' '
-            ? field[(key.Length + 2)..].Trim()
-            : null;
+    // The text after "key:" when the line is that key (empty when its value is on the next lines).
+    private static string? Value(string field, string key)
+    {
+        if (!field.StartsWith(key, StringComparison.Ordinal) || field.Length == key.Length || field[key.Length] != ':') return null;
+        string rest = field[(key.Length + 1)..];
+        return rest.Length == 0 ? "" : rest[0] == ' ' ? rest.Trim() : null;
+    }
 
-    // A plain YAML scalar that reads as the same text: no quotes, flow or block indicators, comment or key.
-    private static bool Plain(string v) =>
-        v.Length > 0 && "[]{}&*!|>'\"%@`#,?:-".IndexOf(v[0]) < 0 && !v.Contains(" #", StringComparison.Ordinal)
-        && !v.Contains(": ", StringComparison.Ordinal) && !v.EndsWith(':') && !v.Contains('\t');
+    // A one-line scalar as YAML reads it: double- or single-quoted without escapes, or plain
+    // (no indicator, comment or key in it). Null for anything else.
+    private static string? Scalar(string v)
+    {
+        if (v.Length >= 2 && v[0] is '"' or '\'' && v[^1] == v[0])
+        {
+            string inner = v[1..^1];
+            return inner.Contains(v[0]) || inner.Contains('\\') || inner.Trim().Length == 0 ? null : inner.Trim();
+        }
+        bool plain = v.Length > 0 && "[]{}&*!|>'\"%@`#,?:-".IndexOf(v[0]) < 0 && !v.Contains(" #", StringComparison.Ordinal)
+            && !v.Contains(": ", StringComparison.Ordinal) && !v.EndsWith(':') && !v.Contains('\t');
+        return plain ? v : null;
+    }
 
+    // [a, "b, c", d]: items split at commas outside quotes, each a scalar as above.
     private static IReadOnlyList<string>? FlowList(string v)
     {
         if (v.Length < 2 || v[0] != '[' || v[^1] != ']') return null;
-        string inner = v[1..^1];
-        if (inner.Trim().Length == 0) return [];
-        var items = inner.Split(',').Select(s => s.Trim()).ToList();
-        return items.All(s => Plain(s) && !s.Contains('[') && !s.Contains(']')) ? items : null;
+        var items = new List<string>();
+        int start = 1;
+        char quote = '\0';
+        for (int i = 1; i < v.Length - 1; i++)
+        {
+            char ch = v[i];
+            if (quote != '\0') { if (ch == quote) quote = '\0'; }
+            else if (ch is '"' or '\'') quote = ch;
+            else if (ch == ',') { items.Add(v[start..i].Trim()); start = i + 1; }
+            else if (ch is '[' or ']' or '{' or '}') return null;
+        }
+        if (quote != '\0') return null;
+        string last = v[start..^1].Trim();
+        if (last.Length > 0 || items.Count > 0) items.Add(last);
+        var scalars = items.Select(Scalar).ToList();
+        return scalars.All(x => x is not null) ? scalars.Select(x => x!).ToList() : null;
     }
 }

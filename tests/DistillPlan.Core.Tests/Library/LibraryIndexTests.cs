@@ -26,8 +26,9 @@ public class LibraryIndexTests
               - {form: antoine-log10, a: 9.13361, b: 1195.13, c: -60.68, p_unit: Pa, t_unit: K, t_min_k: 265.5, t_max_k: 372.51, source: poling-2001}
 
           # an aromatic
-          - name: toluene
-            cas: 108-88-3
+          - name: 'toluene'
+            aliases: ["methylbenzene", 'toluol', "phenyl, methyl-"]
+            cas: "108-88-3"
             molar_mass_g_per_mol: {value: 92.141, source: crc-organic}
             normal_boiling_point_k: {value: 383.75, source: crc-organic}
             vapor_pressure:
@@ -49,11 +50,12 @@ public class LibraryIndexTests
         {
             var library = SolventLibrary.LoadIndexed(path);
             Assert.Equal(0, library.EntriesRead);
-            Assert.Equal("toluene", library.Find("108-88-3").Name);
+            Assert.Equal("toluene", library.Find("phenyl, methyl-").Name);
             Assert.Equal(1, library.EntriesRead);
             Assert.Equal("ethyl acetate", library.Find("acoet").Name);
             Assert.Equal(2, library.EntriesRead);
             Assert.Equal(["ethyl acetate"], library.Suggest("ethyl acetat", 1));
+            Assert.Equal(2, library.EntriesRead);
         }
         finally { File.Delete(path); }
     }
@@ -62,6 +64,7 @@ public class LibraryIndexTests
     public void A_plan_of_one_shipped_solvent_reads_one_entry()
     {
         var library = SolventLibrary.LoadShipped();
+        Assert.Equal(0, library.EntriesRead);   // a file of another layout would have been read whole
         library.Find("ethyl-acetate");
         Assert.Equal(1, library.EntriesRead);
     }
@@ -93,21 +96,22 @@ public class LibraryIndexTests
     public static TheoryData<string> Broken => new()
     {
         Two.Replace("a: 9.07954", "a: abc"),
-        Two.Replace("cas: 108-88-3", "cas: 108-88-4"),
+        Two.Replace("aliases: [EtOAc, AcOEt]", "aliases: [EtOAc, \"toluol\"]"),
+        Two.Replace("cas: \"108-88-3\"", "cas: \"108-88-4\""),
         Two.Replace("source: poling-2001}\n\n", "source: nowhere}\n\n"),
         Two.Replace("aliases: [EtOAc, AcOEt]", "alias: [EtOAc]"),
         Two.Replace("    normal_boiling_point_k: {value: 383.75, source: crc-organic}\n", ""),
         Two.Replace("t_max_k: 410", "t_max_k: 200"),
         Two.Replace("format: distillplan-solvents/1", "format: other/2"),
-        Two.Replace("  - name: toluene", "  - name: ethyl acetate"),
-        Two.Replace("cas: 108-88-3", "cas: 141-78-6"),
+        Two.Replace("  - name: 'toluene'", "  - name: ethyl acetate"),
+        Two.Replace("cas: \"108-88-3\"", "cas: 141-78-6"),
         Two.Replace("aliases: [EtOAc, AcOEt]", "aliases: [EtOAc, toluene]"),
         Two.Replace("sources:", "colours: []\nsources:"),
         Two + "\nother: 1\n",
         Two + "\n   - : [",
-        Two.Replace("  - name: toluene", "  - name: \"toluene"),
-        Two.Replace("name: toluene", "name:"),
-        Two.Replace("    cas: 108-88-3", "\tcas: 108-88-3"),
+        Two.Replace("  - name: 'toluene'", "  - name: \"toluene"),
+        Two.Replace("name: 'toluene'", "name:"),
+        Two.Replace("    cas: \"108-88-3\"", "\tcas: 108-88-3"),
     };
 
     [Theory]
@@ -133,9 +137,35 @@ public class LibraryIndexTests
         {
             var library = SolventLibrary.LoadIndexed(path);
             Assert.Equal(350.25, library.Find("EtOAc").NormalBoilingPointK);
+            Assert.Equal(1, library.EntriesRead);
             var e = Assert.Throws<LibraryFormatException>(() => library.Find("toluene"));
-            Assert.Equal(20, e.Line);   // the toluene curve's line
+            Assert.Equal(21, e.Line);   // the toluene curve's line
             Assert.Contains("expected a number", e.Message);
+        }
+        finally { File.Delete(path); }
+    }
+    // Layouts the index does not read itself (it then reads the file whole) and one it does.
+    public static TheoryData<string> OtherLayouts => new()
+    {
+        Two.Replace("aliases: [EtOAc, AcOEt]", "aliases:\n      - EtOAc\n      - AcOEt"),
+        Two.Replace("  - name: ethyl acetate", "  -\n    name: ethyl acetate"),
+        Two[..Two.IndexOf("solvents:")] + Two[Two.IndexOf("solvents:")..].Replace("\n  ", "\n"),
+        Two.Replace("name: ethyl acetate", "name: ethyl acetate  # EtOAc"),
+        Two.Replace("name: ethyl acetate", "name: >-\n      ethyl\n      acetate"),
+    };
+
+    [Theory]
+    [MemberData(nameof(OtherLayouts))]
+    public void Other_layouts_give_the_same_entries(string text)
+    {
+        string path = Write(text);
+        try
+        {
+            var whole = SolventYamlLoader.Load(path).Solvents;
+            var indexed = SolventLibrary.LoadIndexed(path);
+            Assert.Equal(whole.Select(x => (x.Name, x.Cas, string.Join('|', x.Aliases), x.Origin, x.NormalBoilingPointK)),
+                indexed.Solvents.Select(x => (x.Name, x.Cas, string.Join('|', x.Aliases), x.Origin, x.NormalBoilingPointK)));
+            Assert.Equal("ethyl acetate", indexed.Find("AcOEt").Name);
         }
         finally { File.Delete(path); }
     }

@@ -53,10 +53,13 @@ internal static class LibraryTextIndex
         return (sources, entries);
     }
 
-    private readonly record struct Line(int Start, string Text)
+    // A line as a range of the text (no copy: the shipped file has 1,500 lines and copying them
+    // costs as much as the rest of the index).
+    private readonly record struct Line(string Source, int Start, int Length)
     {
+        public ReadOnlySpan<char> Text => Source.AsSpan(Start, Length);
         public int Indent => Text.Length - Text.TrimStart(' ').Length;
-        public bool IsBlankOrComment => Text.Trim().Length == 0 || Text.TrimStart().StartsWith('#');
+        public bool IsBlankOrComment => Text.Trim().IsEmpty || Text.TrimStart()[0] == '#';
     }
 
     private static List<Line> Lines(string text)
@@ -67,18 +70,20 @@ internal static class LibraryTextIndex
         {
             int nl = text.IndexOf('\n', start);
             int end = nl < 0 ? text.Length : nl;
-            lines.Add(new Line(start, text[start..end].TrimEnd('\r')));
+            int length = end - start;
+            if (length > 0 && text[end - 1] == '\r') length--;
+            lines.Add(new Line(text, start, length));
             if (nl < 0) break;
             start = nl + 1;
         }
         return lines;
     }
 
-    private static bool IsSolventsKey(string line)
+    private static bool IsSolventsKey(ReadOnlySpan<char> line)
     {
         if (!line.StartsWith("solvents:", StringComparison.Ordinal)) return false;
-        string rest = line["solvents:".Length..].Trim();
-        return rest.Length == 0 || rest.StartsWith('#');
+        var rest = line["solvents:".Length..].Trim();
+        return rest.IsEmpty || rest[0] == '#';
     }
 
     // The line numbers of the list items, or null when something other than items at one
@@ -117,7 +122,7 @@ internal static class LibraryTextIndex
         {
             var line = lines[j];
             if (line.IsBlankOrComment) continue;
-            string text = line.Text;
+            var text = line.Text;
             int at = line.Indent;
             if (j == first)
             {
@@ -127,7 +132,7 @@ internal static class LibraryTextIndex
             }
             if (keyIndent < 0) keyIndent = at;
             if (at != keyIndent) continue;      // a deeper line: inside another field's value
-            string field = text[at..];
+            var field = text[at..];
             if (Value(field, "name") is { } n) { if (name is not null || Scalar(n) is not { } v) return null; name = v; }
             else if (Value(field, "cas") is { } c) { if (cas is not null || Scalar(c) is not { } v) return null; cas = v; }
             else if (Value(field, "aliases") is { } a)
@@ -144,11 +149,11 @@ internal static class LibraryTextIndex
     }
 
     // The text after "key:" when the line is that key (empty when its value is on the next lines).
-    private static string? Value(string field, string key)
+    private static string? Value(ReadOnlySpan<char> field, string key)
     {
         if (!field.StartsWith(key, StringComparison.Ordinal) || field.Length == key.Length || field[key.Length] != ':') return null;
-        string rest = field[(key.Length + 1)..];
-        return rest.Length == 0 ? "" : rest[0] == ' ' ? rest.Trim() : null;
+        var rest = field[(key.Length + 1)..];
+        return rest.IsEmpty ? "" : rest[0] == ' ' ? rest.Trim().ToString() : null;
     }
 
     // A one-line scalar as YAML reads it: double- or single-quoted without escapes, or plain

@@ -212,7 +212,7 @@ public sealed class ReportOutputTests : IDisposable
         string[]? opened = null;
         var before = CliApp.OpenPlanner;
         CliApp.OpenPlanner = a => { opened = a; return 0; };
-        try { Assert.Equal(0, CliRunner.Run(file).ExitCode); }
+        try { Assert.Equal(0, CliRunner.RunInProcess(file).ExitCode); }
         finally { CliApp.OpenPlanner = before; }
         Assert.Equal([file], opened!);
         var missing = CliRunner.Run("no-such-plan.yaml");

@@ -124,7 +124,7 @@ public class TableReaderTests
     {
         string text = UnifacParameters.ReadResource(Lle);
         var damage = Gen.Select(Gen.Int[0, text.Length - 1], Gen.Int[0, 4],
-            Gen.Char["\"',[]{}#:-&*!|>%@`\\ \t\r\n0a.e+"]);
+            Gen.Char["\"',[]{}#:-&*!|>%@`\\ \t\r\n0a.e+\uFEFF\u0085é"]);
         damage.Sample((at, kind, c) =>
         {
             string broken = Damage(text, at, kind, c);

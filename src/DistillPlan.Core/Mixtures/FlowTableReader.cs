@@ -6,8 +6,8 @@ namespace DistillPlan.Core.Mixtures;
 /// (<c>  - [1, "CH3", 1, "CH2", 0.6325, 1.0608]</c>); mappings of <c>  key: scalar</c> lines;
 /// plain or double-quoted scalars (no escapes), <c>#</c> comments and blank lines.
 /// YamlDotNet's scanner reads about 4 MB/s in the native binary, which made the three UNIFAC
-/// tables cost 20–25 ms of a mixture plan's start; this reads them some fifteen times faster, with a
-/// seventh of the allocation (bench/DistillPlan.Benchmarks, TableBenchmarks).
+/// tables cost 20–25 ms of a mixture plan's start; this reads them with about a tenth of the work
+/// and a seventh of the allocation (bench/DistillPlan.Benchmarks, TableBenchmarks).
 /// Anything it does not recognise (tabs, control characters, a byte-order mark, anchors, tags, block scalars,
 /// escapes, quotes spanning lines, odd indentation, duplicate keys) makes it answer null, and the
 /// caller reads the text with <see cref="YamlTableReader"/> instead, so a file it cannot read

@@ -138,14 +138,18 @@ public sealed record ActivityModelChoice(
     }
 
     /// <summary>True for a component carrying a carboxylic-acid group (original UNIFAC main group
-    /// 20 COOH; Dortmund main groups 20 COOH and 44 HCOOH).</summary>
+    /// 20 COOH; Dortmund main groups 20 COOH and 44 HCOOH). A component the Dortmund table assigns
+    /// is answered from that assignment (the groups the default model computes with), so a
+    /// Dortmund plan does not read the original table just for this check; the original table is
+    /// read only for components the Dortmund table does not assign.</summary>
     /// <param name="component">The component.</param>
     public static bool IsCarboxylicAcid(MixtureComponent component)
     {
         ArgumentNullException.ThrowIfNull(component);
-        static bool Has(IReadOnlyDictionary<int, int>? groups, UnifacParameters table, params int[] mainGroups)
-            => groups is not null && groups.Keys.Any(k => table.Subgroups.TryGetValue(k, out var s) && mainGroups.Contains(s.MainGroup));
-        return Has(UnifacParameters.Dortmund.GroupsFor(component), UnifacParameters.Dortmund, 20, 44)
-               || Has(component.UnifacSubgroups, UnifacParameters.Original, 20);
+        static bool Has(IReadOnlyDictionary<int, int> groups, UnifacParameters table, params int[] mainGroups)
+            => groups.Keys.Any(k => table.Subgroups.TryGetValue(k, out var s) && mainGroups.Contains(s.MainGroup));
+        if (UnifacParameters.Dortmund.GroupsFor(component) is { } dortmund)
+            return Has(dortmund, UnifacParameters.Dortmund, 20, 44);
+        return component.UnifacSubgroups is { } original && Has(original, UnifacParameters.Original, 20);
     }
 }

@@ -1,6 +1,4 @@
 using System.Globalization;
-using System.Reflection;
-using YamlDotNet.RepresentationModel;
 
 namespace DistillPlan.Core.Mixtures;
 
@@ -112,34 +110,43 @@ public sealed class PublishedMixtureFacts
 
     private static PublishedMixtureFacts Load()
     {
-        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(Resource)
-            ?? throw new InvalidOperationException($"embedded resource {Resource} is missing from the build");
-        using var reader = new StreamReader(stream);
-        var yaml = new YamlStream();
-        yaml.Load(reader);
-        var root = (YamlMappingNode)yaml.Documents[0].RootNode;
-        var sources = ((YamlMappingNode)root["sources"]).Children
-            .ToDictionary(p => ((YamlScalarNode)p.Key).Value!, p => ((YamlScalarNode)p.Value).Value!);
+        string text = UnifacParameters.ReadResource(Resource);
+        return FromTable(FlowTableReader.TryRead(text) ?? YamlTableReader.Read(new StringReader(text), Resource), Resource);
+    }
 
-        string Cell(YamlNode row, int i) => ((YamlScalarNode)((YamlSequenceNode)row)[i]).Value ?? "";
-        double? Number(YamlNode row, int i) => Cell(row, i) is "null" or "" ? null : double.Parse(Cell(row, i), CultureInfo.InvariantCulture);
-        string Source(YamlNode row, int i) => sources.TryGetValue(Cell(row, i), out var s)
-            ? s : throw new FormatException($"{Resource}, line {row.Start.Line}: unknown source key '{Cell(row, i)}'");
+    /// <summary>Resource name of the shipped facts (for the readers' tests and benchmarks).</summary>
+    internal const string ShippedResource = Resource;
 
-        var miscible = ((YamlSequenceNode)root["miscible"]).Children.Select(row => new MiscibilityFact(
-            Cell(row, 0), Cell(row, 1), Cell(row, 2), Cell(row, 3),
-            Number(row, 4)!.Value + 273.15, Number(row, 5)!.Value + 273.15, Source(row, 6))).ToList();
-        var azeotropes = ((YamlSequenceNode)root["azeotropes"]).Children.Select(row => new PublishedAzeotropeFact(
-            Cell(row, 0), Cell(row, 1), Cell(row, 2), Cell(row, 3),
-            Cell(row, 4) switch
+    /// <summary>The facts' checks and content, whichever reader read the text.</summary>
+    internal static PublishedMixtureFacts FromTable(TableText root, string origin)
+    {
+        var sources = new Dictionary<string, string>();
+        foreach (var (key, value) in root.Pairs("sources", origin)) sources.TryAdd(key, value.Value);
+
+        double? Number(TableCell cell) => cell.Value is "null" or ""
+            ? null
+            : double.TryParse(cell.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) && double.IsFinite(value)
+                ? value
+                : throw new FormatException($"{origin}, line {cell.Line}: '{cell.Value}' is not a number or null");
+        double Required(TableCell cell) => Number(cell)
+            ?? throw new FormatException($"{origin}, line {cell.Line}: a number is needed here, not '{cell.Value}'");
+        string Source(TableCell cell) => sources.TryGetValue(cell.Value, out var s)
+            ? s : throw new FormatException($"{origin}, line {cell.Line}: unknown source key '{cell.Value}'");
+
+        var miscible = root.Rows("miscible", 7, origin).Select(row => new MiscibilityFact(
+            row[0].Value, row[1].Value, row[2].Value, row[3].Value,
+            Required(row[4]) + 273.15, Required(row[5]) + 273.15, Source(row[6]))).ToList();
+        var azeotropes = root.Rows("azeotropes", 11, origin).Select(row => new PublishedAzeotropeFact(
+            row[0].Value, row[1].Value, row[2].Value, row[3].Value,
+            row[4].Value switch
             {
                 "zeotropic" => null,
                 "minimum-boiling" => AzeotropeKind.MinimumBoiling,
                 "maximum-boiling" => AzeotropeKind.MaximumBoiling,
-                var k => throw new FormatException($"{Resource}, line {row.Start.Line}: unknown kind '{k}'"),
+                var k => throw new FormatException($"{origin}, line {row[4].Line}: unknown kind '{k}'"),
             },
-            Number(row, 5) + 273.15, Number(row, 6), Cell(row, 7) is "null" or "" ? null : Cell(row, 7),
-            Number(row, 8)!.Value, Number(row, 9)!.Value, Source(row, 10))).ToList();
+            Number(row[5]) + 273.15, Number(row[6]), row[7].Value is "null" or "" ? null : row[7].Value,
+            Required(row[8]), Required(row[9]), Source(row[10]))).ToList();
         return new PublishedMixtureFacts(miscible, azeotropes);
     }
 }

@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Reflection;
-using YamlDotNet.RepresentationModel;
 
 namespace DistillPlan.Core.Mixtures;
 
@@ -116,6 +115,12 @@ public sealed class UnifacParameters
     /// <summary>All subgroups by id.</summary>
     public IReadOnlyDictionary<int, UnifacSubgroup> Subgroups => _subgroups;
 
+    /// <summary>Every interaction by (m, n), for the readers' tests.</summary>
+    internal IReadOnlyDictionary<(int M, int N), UnifacInteraction> Interactions => _interactions;
+
+    /// <summary>Every assignment by CAS, for the readers' tests.</summary>
+    internal IReadOnlyDictionary<string, IReadOnlyDictionary<int, int>> Assignments => _assignments;
+
     /// <summary>Number of main-group pairs (m, n), m ≠ n, that have a parameter.</summary>
     public int InteractionCount => _interactions.Count;
 
@@ -172,20 +177,24 @@ public sealed class UnifacParameters
     /// <param name="origin">Name of the file or resource, for error messages.</param>
     /// <exception cref="FormatException">The text is not a valid table.</exception>
     public static UnifacParameters Parse(TextReader reader, string origin)
-    {
-        var stream = new YamlStream();
-        stream.Load(reader);
-        if (stream.Documents.Count != 1 || stream.Documents[0].RootNode is not YamlMappingNode root)
-            throw new FormatException($"{origin}: expected one YAML mapping");
+        => FromTable(YamlTableReader.Read(reader, origin), origin);
 
-        string format = Scalar(root, "format", origin);
+    /// <summary>Reads table text with the quick reader when it has the shipped tables' restricted
+    /// shape, with YamlDotNet otherwise: the same table, or the same error, either way.</summary>
+    internal static UnifacParameters ParseText(string text, string origin)
+        => FromTable(FlowTableReader.TryRead(text) ?? YamlTableReader.Read(new StringReader(text), origin), origin);
+
+    /// <summary>The table's checks and content, whichever reader read the text.</summary>
+    internal static UnifacParameters FromTable(TableText root, string origin)
+    {
+        string format = root.Scalar("format", origin);
         if (format != FormatV1 && format != FormatV2)
             throw new FormatException($"{origin}: format is '{format}', expected '{FormatV1}' or '{FormatV2}'");
         bool v2 = format == FormatV2;
-        string source = Scalar(root, "source", origin);
-        string model = v2 ? Scalar(root, "model", origin) : "unifac";
+        string source = root.Scalar("source", origin);
+        string model = v2 ? root.Scalar("model", origin) : "unifac";
         if (model == "unifac-original") model = "unifac";
-        var variant = !v2 ? UnifacVariant.Original : Scalar(root, "variant", origin) switch
+        var variant = !v2 ? UnifacVariant.Original : root.Scalar("variant", origin) switch
         {
             "original" => UnifacVariant.Original,
             "modified" => UnifacVariant.Modified,
@@ -193,89 +202,75 @@ public sealed class UnifacParameters
         };
 
         var subgroups = new Dictionary<int, UnifacSubgroup>();
-        foreach (var row in Rows(root, "subgroups", 6, origin))
+        foreach (var row in root.Rows("subgroups", 6, origin))
         {
             var subgroup = new UnifacSubgroup(
-                Int(row[0], origin), Text(row[1]), Int(row[2], origin), Text(row[3]),
+                Int(row[0], origin), row[1].Value, Int(row[2], origin), row[3].Value,
                 Number(row[4], origin), Number(row[5], origin));
             if (!subgroups.TryAdd(subgroup.Id, subgroup))
-                throw new FormatException($"{origin}, line {row[0].Start.Line}: subgroup {subgroup.Id} listed twice");
+                throw new FormatException($"{origin}, line {row[0].Line}: subgroup {subgroup.Id} listed twice");
         }
 
         var mainGroups = subgroups.Values.Select(s => s.MainGroup).ToHashSet();
         var interactions = new Dictionary<(int, int), UnifacInteraction>();
         int width = variant == UnifacVariant.Modified ? 5 : 3;
-        foreach (var row in Rows(root, "interactions", width, origin))
+        foreach (var row in root.Rows("interactions", width, origin))
         {
             int m = Int(row[0], origin), n = Int(row[1], origin);
             if (!mainGroups.Contains(m) || !mainGroups.Contains(n) || m == n)
                 throw new FormatException(
-                    $"{origin}, line {row[0].Start.Line}: interaction ({m}, {n}) names an unknown or equal main group");
+                    $"{origin}, line {row[0].Line}: interaction ({m}, {n}) names an unknown or equal main group");
             var interaction = width == 5
                 ? new UnifacInteraction(Number(row[2], origin), Number(row[3], origin), Number(row[4], origin))
                 : new UnifacInteraction(Number(row[2], origin), 0, 0);
             if (!interactions.TryAdd((m, n), interaction))
-                throw new FormatException($"{origin}, line {row[0].Start.Line}: interaction ({m}, {n}) listed twice");
+                throw new FormatException($"{origin}, line {row[0].Line}: interaction ({m}, {n}) listed twice");
         }
 
         var assignments = new Dictionary<string, IReadOnlyDictionary<int, int>>();
-        if (v2 && root.Children.ContainsKey(new YamlScalarNode("assignments")))
-            foreach (var row in Rows(root, "assignments", 4, origin))
+        if (v2 && root.Has("assignments"))
+            foreach (var row in root.Rows("assignments", 4, origin))
             {
-                var cells = Text(row[2]).Split(' ', StringSplitOptions.RemoveEmptyEntries);
+                var cells = row[2].Value.Split(' ', StringSplitOptions.RemoveEmptyEntries);
                 if (cells.Length == 0 || cells.Length % 2 != 0)
-                    throw new FormatException($"{origin}, line {row[0].Start.Line}: assignment needs pairs of subgroup and count");
+                    throw new FormatException($"{origin}, line {row[0].Line}: assignment needs pairs of subgroup and count");
                 var counts = new Dictionary<int, int>();
                 for (int k = 0; k < cells.Length; k += 2)
                 {
                     if (!int.TryParse(cells[k], CultureInfo.InvariantCulture, out int id) || !subgroups.ContainsKey(id)
                         || !int.TryParse(cells[k + 1], CultureInfo.InvariantCulture, out int count) || count <= 0)
-                        throw new FormatException($"{origin}, line {row[0].Start.Line}: '{cells[k]} {cells[k + 1]}' is not a known subgroup and a positive count");
+                        throw new FormatException($"{origin}, line {row[0].Line}: '{cells[k]} {cells[k + 1]}' is not a known subgroup and a positive count");
                     counts[id] = counts.GetValueOrDefault(id) + count;
                 }
-                if (!assignments.TryAdd(Text(row[0]), counts))
-                    throw new FormatException($"{origin}, line {row[0].Start.Line}: CAS {Text(row[0])} assigned twice");
+                if (!assignments.TryAdd(row[0].Value, counts))
+                    throw new FormatException($"{origin}, line {row[0].Line}: CAS {row[0].Value} assigned twice");
             }
 
         return new UnifacParameters(model, variant, source, subgroups, interactions, assignments);
     }
 
-    private static UnifacParameters Load(string resource)
+    private static UnifacParameters Load(string resource) => ParseText(ReadResource(resource), resource);
+
+    /// <summary>The text of an embedded table (for the readers' tests and benchmarks).</summary>
+    internal static string ReadResource(string resource)
     {
         using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(resource)
             ?? throw new InvalidOperationException($"embedded resource {resource} is missing from the build");
         using var reader = new StreamReader(stream);
-        return Parse(reader, resource);
+        return reader.ReadToEnd();
     }
 
-    private static string Scalar(YamlMappingNode root, string key, string origin)
-        => root.Children.TryGetValue(new YamlScalarNode(key), out var node) && node is YamlScalarNode { Value: { } value }
+    /// <summary>Resource names of the shipped tables: original, Dortmund, LLE.</summary>
+    internal static IReadOnlyList<string> ShippedResources { get; } = [OriginalResource, DortmundResource, LleResource];
+
+    private static int Int(TableCell cell, string origin)
+        => int.TryParse(cell.Value, NumberStyles.Integer, CultureInfo.InvariantCulture, out int value)
             ? value
-            : throw new FormatException($"{origin}: missing '{key}'");
+            : throw new FormatException($"{origin}, line {cell.Line}: '{cell.Value}' is not an integer");
 
-    private static IEnumerable<IReadOnlyList<YamlScalarNode>> Rows(YamlMappingNode root, string key, int width, string origin)
-    {
-        if (!root.Children.TryGetValue(new YamlScalarNode(key), out var node) || node is not YamlSequenceNode rows)
-            throw new FormatException($"{origin}: missing list '{key}'");
-        foreach (var row in rows)
-        {
-            if (row is not YamlSequenceNode cells || cells.Children.Count != width
-                || cells.Children.Any(c => c is not YamlScalarNode))
-                throw new FormatException($"{origin}, line {row.Start.Line}: '{key}' rows have {width} plain values");
-            yield return cells.Children.Cast<YamlScalarNode>().ToList();
-        }
-    }
-
-    private static string Text(YamlScalarNode node) => node.Value ?? "";
-
-    private static int Int(YamlScalarNode node, string origin)
-        => int.TryParse(node.Value, NumberStyles.Integer, CultureInfo.InvariantCulture, out int value)
-            ? value
-            : throw new FormatException($"{origin}, line {node.Start.Line}: '{node.Value}' is not an integer");
-
-    private static double Number(YamlScalarNode node, string origin)
-        => double.TryParse(node.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out double value)
+    private static double Number(TableCell cell, string origin)
+        => double.TryParse(cell.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out double value)
            && double.IsFinite(value)
             ? value
-            : throw new FormatException($"{origin}, line {node.Start.Line}: '{node.Value}' is not a number");
+            : throw new FormatException($"{origin}, line {cell.Line}: '{cell.Value}' is not a number");
 }

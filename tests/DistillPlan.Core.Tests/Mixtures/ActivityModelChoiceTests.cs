@@ -128,4 +128,32 @@ public class ActivityModelChoiceTests
         Assert.False(table.TryGetInteraction(21, 35, out _));
         Assert.Contains("Hansen", table.Source);
     }
+
+    [Fact]
+    public void The_acid_check_answers_the_same_from_either_assignment_of_every_shipped_solvent()
+    {
+        // Two independent group assignments of each shipped solvent: the Dortmund Data Bank's (by
+        // CAS, in unifac-dortmund.yaml) and the library's original-UNIFAC groups (solvents.yaml).
+        // The acid check answers from the Dortmund one where it exists (so a Dortmund plan need not
+        // read the original table); that is only sound if both agree on which solvents are acids.
+        int both = 0;
+        foreach (var solvent in Reference.ShippedLibrary.Instance.Solvents)
+        {
+            var component = MixtureComponent.FromSolvent(solvent);
+            if (UnifacParameters.Dortmund.GroupsFor(component) is not { } dortmund || component.UnifacSubgroups is not { } original)
+                continue;
+            both++;
+            bool dortmundAcid = dortmund.Keys.Any(k => UnifacParameters.Dortmund.Subgroups[k].MainGroup is 20 or 44);
+            bool originalAcid = original.Keys.Any(k => UnifacParameters.Original.Subgroups.TryGetValue(k, out var s) && s.MainGroup == 20);
+            Assert.True(dortmundAcid == originalAcid, $"{solvent.Name}: Dortmund says acid {dortmundAcid}, original {originalAcid}");
+        }
+        Assert.True(both >= 20, $"only {both} solvents have both assignments");
+
+        // Acetic (CH3COOH) and formic acid (HCOOH) are carboxylic acids, ethanol and ethyl acetate
+        // are not (their structures; common knowledge).
+        Assert.True(ActivityModelChoice.IsCarboxylicAcid(TestSolvents.ByName("acetic acid")));
+        Assert.True(ActivityModelChoice.IsCarboxylicAcid(TestSolvents.ByName("formic acid")));
+        Assert.False(ActivityModelChoice.IsCarboxylicAcid(TestSolvents.Ethanol));
+        Assert.False(ActivityModelChoice.IsCarboxylicAcid(TestSolvents.EthylAcetate));
+    }
 }

@@ -1,9 +1,3 @@
-using System.Runtime.CompilerServices;
-
-// The tests compare the quick table reader with the YamlDotNet one, and the benchmarks time them.
-[assembly: InternalsVisibleTo("DistillPlan.Core.Tests")]
-[assembly: InternalsVisibleTo("DistillPlan.Benchmarks")]
-
 namespace DistillPlan.Core.Mixtures;
 
 /// <summary>One scalar of a table file and the 1-based line it stands on.</summary>

@@ -7,7 +7,8 @@ namespace DistillPlan.Core.Tests.Library;
 public class LoaderErrorTests
 {
     // A valid one-solvent file; the numbers are Poling 2001 / CRC values for ethyl acetate.
-    private const string Valid = """
+    // Other loader tests start from it.
+    internal const string Valid = """
         format: distillplan-solvents/1
         sources:
           poling-2001: Poling, Prausnitz, O'Connell, The Properties of Gases and Liquids, 5th ed., 2001

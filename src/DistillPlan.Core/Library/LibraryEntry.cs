@@ -16,9 +16,14 @@ internal sealed class LibraryEntry
         _solvent = new Lazy<Solvent>(solvent);
     }
 
-    /// <summary>An entry read by <paramref name="read"/> on first use; a failure is kept and thrown on every use.</summary>
-    public LibraryEntry(string name, string cas, IReadOnlyList<string> aliases, string origin, Func<Solvent> read)
+    /// <summary>
+    /// An entry read by <paramref name="read"/> on first use; a failure is kept and thrown on
+    /// every use. <paramref name="wholeFile"/> reads the entry's whole file at once, for when
+    /// every entry is wanted.
+    /// </summary>
+    public LibraryEntry(string name, string cas, IReadOnlyList<string> aliases, string origin, Func<Solvent> read, Lazy<LibraryFile>? wholeFile = null)
     {
+        WholeFile = wholeFile;
         Name = name;
         Cas = cas;
         Aliases = aliases;
@@ -32,6 +37,9 @@ internal sealed class LibraryEntry
     public IReadOnlyList<string> Aliases { get; }
     /// <summary>File and line of the entry, for messages.</summary>
     public string Origin { get; }
+
+    /// <summary>The file the entry is in, read whole once asked for; null for an entry already read.</summary>
+    public Lazy<LibraryFile>? WholeFile { get; }
 
     public Solvent Solvent => _solvent.Value;
     public bool IsRead => _solvent.IsValueCreated;

@@ -17,7 +17,7 @@ internal static class LibraryTextIndex
 {
     /// <summary>The header's sources and an entry per list item, or null when the layout is not the simple one.</summary>
     public static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries)? TryRead(
-        string text, string file, Func<string, string, IReadOnlyDictionary<string, string>, int, int, Solvent> readEntry)
+        string text, string file, Func<string, string, IReadOnlyDictionary<string, string>, int, int, Solvent> readEntry, Lazy<LibraryFile> wholeFile)
     {
         var lines = Lines(text);
         int list = lines.FindIndex(l => IsSolventsKey(l.Text));
@@ -48,7 +48,7 @@ internal static class LibraryTextIndex
             string entryText = text[startChar..endChar];
             int index = i, firstLine = first;
             entries.Add(new LibraryEntry(keys.Value.Name, keys.Value.Cas, keys.Value.Aliases, $"{file}:{first + 1}",
-                () => readEntry(entryText, file, sources, firstLine, index)));
+                () => readEntry(entryText, file, sources, firstLine, index), wholeFile));
         }
         return (sources, entries);
     }

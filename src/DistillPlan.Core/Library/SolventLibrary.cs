@@ -20,7 +20,12 @@ public sealed class SolventLibrary
         _entries = entries;
         Citations = sources;
         Files = files;
-        _all = new(() => _entries.Select(e => e.Solvent).ToList(), LazyThreadSafetyMode.ExecutionAndPublication);
+        _all = new(() =>
+        {
+            foreach (var file in _entries.Where(e => !e.IsRead).Select(e => e.WholeFile).OfType<Lazy<LibraryFile>>().Distinct())
+                _ = file.Value;
+            return _entries.Select(e => e.Solvent).ToList();
+        }, LazyThreadSafetyMode.ExecutionAndPublication);
         _byKey = new Dictionary<string, LibraryEntry>(StringComparer.Ordinal);
         foreach (var s in entries)
             foreach (string key in s.Keys)

@@ -86,9 +86,14 @@ public static class SolventYamlLoader
     /// </summary>
     internal static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries) ParseIndexed(string text, string file)
     {
-        if (LibraryTextIndex.TryRead(text, file, ReadEntry) is { } indexed) return indexed;
-        var whole = Parse(text, file);
-        return (whole.Sources, whole.Solvents.Select(s => new LibraryEntry(s)).ToList());
+        // Every entry read one by one costs five times one read of the whole file: a list of all
+        // solvents reads the file whole, and entries not read yet are taken from that.
+        var whole = new Lazy<LibraryFile>(() => Parse(text, file), LazyThreadSafetyMode.ExecutionAndPublication);
+        Solvent Read(string entryText, string f, IReadOnlyDictionary<string, string> sources, int firstLine, int index) =>
+            whole.IsValueCreated ? whole.Value.Solvents[index] : ReadEntry(entryText, f, sources, firstLine, index);
+        if (LibraryTextIndex.TryRead(text, file, Read, whole) is { } indexed) return indexed;
+        var all = Parse(text, file);
+        return (all.Sources, all.Solvents.Select(s => new LibraryEntry(s)).ToList());
     }
 
     /// <summary>The sources of a library's header (the text before its <c>solvents:</c> key); null when it is empty.</summary>

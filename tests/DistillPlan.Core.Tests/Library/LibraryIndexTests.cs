@@ -54,8 +54,12 @@ public class LibraryIndexTests
     {
         var library = SolventLibrary.LoadShipped();
         Assert.Equal(0, library.EntriesRead);   // a file of another layout would have been read whole
-        library.Find("ethyl-acetate");
+        var found = library.Find("ethyl-acetate");
         Assert.Equal(1, library.EntriesRead);
+        // A list of all reads the rest (the file whole, at once) and keeps the entry already read.
+        var all = library.Solvents;
+        Assert.Equal(all.Count, library.EntriesRead);
+        Assert.Same(found, all.Single(s => s.Name == "ethyl acetate"));
     }
 
     [Fact]

@@ -191,15 +191,17 @@ internal static class LiquidStability
     private const double CollapseDistance = 1e-7;
 
     /// <summary>Below this distance to the feed (max |Δx|) the substitution is close enough to
-    /// linear for its contraction factor to show (checked on the shipped mixtures: the factor
-    /// settles to three figures there, while it still drifts at 1e-2).</summary>
-    private const double LinearRegimeDistance = 1e-3;
+    /// linear for its contraction factor to show (checked on the issue-12 ternaries: the factor
+    /// drifts by 1 to 2 % a step there and settles to three figures by 1e-3; the property test
+    /// StabilityTestProperties compares the verdicts with the plain test).</summary>
+    private const double LinearRegimeDistance = 1e-2;
 
     /// <summary>How many successive distance ratios must agree.</summary>
     private const int ApproachSteps = 3;
 
-    /// <summary>Ratios agreeing to this share count as one steady contraction factor.</summary>
-    private const double SteadyRatio = 0.01;
+    /// <summary>Ratios agreeing to this share count as one steady contraction factor (a trial
+    /// leaving the feed shows a growing ratio at once).</summary>
+    private const double SteadyRatio = 0.03;
 
     /// <summary>A contraction slower than this is too close to the spinodal to be read from a few steps.</summary>
     private const double MaximumContraction = 0.95;

@@ -26,6 +26,8 @@ public class PlanBenchmarks
     private const string Ternary = "acetone=50,ethanol=30,toluene=20";
     private const string WetTernary = "ethyl-acetate=60,ethanol=25,water=15";
     private const string StripCharge = "thf=12L,toluene=3L";
+    private const string ChlorinatedTernary = "methanol=40,dichloromethane=40,toluene=20";
+    private const string HexaneTernary = "hexane=50,ethyl-acetate=40,methanol=10";
 
     [GlobalSetup]
     public void Setup()
@@ -74,6 +76,14 @@ public class PlanBenchmarks
     /// <summary>A whole text-UI keystroke for the wet extract.</summary>
     [Benchmark]
     public PlanOutcome WetTernaryKeystroke() => _planner.Compute(new PlanDocument { Charge = WetTernary });
+
+    /// <summary>A ternary with a chlorinated solvent: setpoints and the ramp.</summary>
+    [Benchmark]
+    public StripPlan ChlorinatedTernaryPlanWithRamp() => PlanWithRamp(ChlorinatedTernary);
+
+    /// <summary>Hexane, ethyl acetate and a little methanol (a chromatography eluent): setpoints and the ramp.</summary>
+    [Benchmark]
+    public StripPlan HexaneTernaryPlanWithRamp() => PlanWithRamp(HexaneTernary);
 
     /// <summary>`distillplan azeotrope ethanol water` at 1013.25 mbar.</summary>
     [Benchmark]

@@ -128,10 +128,11 @@ public static class AzeotropeSearch
             [components[1].Name] = equilibrium.PureBoilingTemperatureK(1, pressurePa),
         };
 
-        // y1 − x1 at the bubble point; the last temperature warm-starts the next solve.
+        // y1 − x1 at the bubble point; the last temperature warm-starts the next solve. Only T
+        // and y are needed here, so the point's reader parts (names, K values) are not built.
         double Excess(double x1)
         {
-            var point = equilibrium.BubbleTemperature(pressurePa, [x1, 1 - x1], initialGuessK: guessK);
+            var point = equilibrium.BubbleTemperatureCore(pressurePa, equilibrium.Normalise([x1, 1 - x1], "liquid"), initialGuessK: guessK);
             guessK = point.TemperatureK;
             return point.Y[0] - x1;
         }

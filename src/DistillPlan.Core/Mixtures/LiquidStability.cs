@@ -56,17 +56,24 @@ internal static class LiquidStability
     }
 
     /// <summary>Successive substitution of the stationarity condition; returns ΣW at convergence
-    /// or null when it did not settle. A trial that is settling onto the feed itself (the trivial
-    /// solution, which the caller discards) stops there instead of converging to 1e-10: for a
-    /// liquid that does not split every start ends so, slowly, and that was most of a bubble
-    /// point's cost. Settling means within <see cref="CollapseDistance"/> of the feed with the
-    /// steps still shrinking; an unstable feed repels the iteration, so its steps grow there.</summary>
+    /// or null when it did not settle or is settling onto the feed itself (the trivial solution,
+    /// which the caller discards in any case). Such a trial stops there instead of converging to
+    /// 1e-10: for a liquid that does not split every start ends so, slowly, and that was most of
+    /// a bubble point's cost. Settling means either within <see cref="CollapseDistance"/> of the
+    /// feed with the steps still shrinking, or (sooner) a geometric approach to the feed: within
+    /// <see cref="LinearRegimeDistance"/> of it, the distance shrinking by the same factor below
+    /// 1 at every step (<see cref="IsGeometricApproach"/>). Near the trivial solution the
+    /// substitution is linear, so a steady factor below 1 is the contraction of the iteration
+    /// there and the trial converges onto the feed; an unstable feed repels the iteration, so
+    /// its distance grows there instead.</summary>
     private static double? Iterate(IActivityModel model, double temperatureK, double[] z, double[] d, double[] w, Span<double> lnGamma)
     {
         int n = w.Length;
         Span<double> x = stackalloc double[n];
         double sum = 0, previousChange = double.PositiveInfinity;
         int shrinking = 0;
+        Span<double> distances = stackalloc double[ApproachSteps + 1]; // the last few distances to the feed, newest last
+        distances.Fill(double.PositiveInfinity);
         for (int iteration = 0; iteration < 300; iteration++)
         {
             double total = 0;
@@ -86,7 +93,10 @@ internal static class LiquidStability
             if (change < 1e-10) return sum;
             shrinking = change < previousChange ? shrinking + 1 : 0;
             previousChange = change;
-            if (shrinking >= 3 && IsNearFeed(w, sum, z)) return sum;
+            if (shrinking >= 3 && IsNearFeed(w, sum, z)) return null;
+            distances[1..].CopyTo(distances);
+            distances[^1] = DistanceToFeed(w, sum, z);
+            if (IsGeometricApproach(distances)) return null;
         }
         return sum; // slow convergence near a plait point: use where it got to
     }
@@ -179,6 +189,46 @@ internal static class LiquidStability
     /// <summary>A settling trial this close to the feed (max |Δx|) is the trivial solution; well
     /// inside <see cref="Trivial"/>, the distance at which the caller discards a trial.</summary>
     private const double CollapseDistance = 1e-7;
+
+    /// <summary>Below this distance to the feed (max |Δx|) the substitution is close enough to
+    /// linear for its contraction factor to show (checked on the issue-12 ternaries: the factor
+    /// drifts by 1 to 2 % a step there and settles to three figures by 1e-3; the property test
+    /// StabilityTestProperties compares the verdicts with the plain test).</summary>
+    private const double LinearRegimeDistance = 1e-2;
+
+    /// <summary>How many successive distance ratios must agree.</summary>
+    private const int ApproachSteps = 3;
+
+    /// <summary>Ratios agreeing to this share count as one steady contraction factor (a trial
+    /// leaving the feed shows a growing ratio at once).</summary>
+    private const double SteadyRatio = 0.03;
+
+    /// <summary>A contraction slower than this is too close to the spinodal to be read from a few steps.</summary>
+    private const double MaximumContraction = 0.95;
+
+    /// <summary>True when the trial approaches the feed geometrically: the newest distance is
+    /// inside <see cref="LinearRegimeDistance"/> and the last <see cref="ApproachSteps"/> ratios of
+    /// successive distances agree to <see cref="SteadyRatio"/> and are below
+    /// <see cref="MaximumContraction"/>.</summary>
+    private static bool IsGeometricApproach(ReadOnlySpan<double> distances)
+    {
+        if (!(distances[^1] < LinearRegimeDistance)) return false;
+        double first = distances[1] / distances[0];
+        if (!(first < MaximumContraction)) return false;
+        for (int i = 2; i < distances.Length; i++)
+        {
+            double ratio = distances[i] / distances[i - 1];
+            if (!(ratio < MaximumContraction) || Math.Abs(ratio - first) > SteadyRatio * first) return false;
+        }
+        return true;
+    }
+
+    private static double DistanceToFeed(double[] w, double sum, double[] z)
+    {
+        double m = 0;
+        for (int i = 0; i < w.Length; i++) m = Math.Max(m, Math.Abs(w[i] / sum - z[i]));
+        return m;
+    }
 
     private static bool IsNearFeed(double[] w, double sum, double[] z)
     {

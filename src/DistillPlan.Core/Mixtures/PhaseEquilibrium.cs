@@ -103,6 +103,16 @@ public sealed partial class PhaseEquilibrium
         double toleranceK = 1e-9, int maxIterations = 100, double? initialGuessK = null)
     {
         var x = Normalise(liquid, nameof(liquid));
+        var (t, p, y, gamma, split) = BubbleTemperatureCore(pressurePa, x, toleranceK, maxIterations, initialGuessK);
+        return Point(SaturationKind.BubblePoint, t, p, x, y, gamma, split);
+    }
+
+    /// <summary>The bubble point at P of normalised x without the reader's parts of an
+    /// <see cref="EquilibriumPoint"/> (names, K values, relative volatilities): the same numbers
+    /// as <see cref="BubbleTemperature"/>, for a scan that needs only T, y and the phases.</summary>
+    internal (double TemperatureK, double PressurePa, double[] Y, double[] Gamma, LiquidPhaseSplit Split) BubbleTemperatureCore(
+        double pressurePa, double[] x, double toleranceK = 1e-9, int maxIterations = 100, double? initialGuessK = null)
+    {
         RequirePressure(pressurePa);
         RequireVolatile(x, "bubble temperature");
         double lnP = Math.Log(pressurePa);
@@ -115,11 +125,11 @@ public sealed partial class PhaseEquilibrium
         if (split.IsSplit && ThreePhaseBubbleTemperature(pressurePa, x, split, toleranceK, maxIterations) is { } three)
         {
             var (p3, y3, gamma3) = BubblePressureCore(three.TemperatureK, three.Split.Phases[0].X);
-            return Point(SaturationKind.BubblePoint, three.TemperatureK, p3, x, y3, gamma3, three.Split);
+            return (three.TemperatureK, p3, y3, gamma3, three.Split);
         }
         if (split.IsSplit) split = Single(t, x, "one liquid: the predicted split vanishes at the three-phase temperature");
         var (p, y, gamma) = BubblePressureCore(t, x);
-        return Point(SaturationKind.BubblePoint, t, p, x, y, gamma, split);
+        return (t, p, y, gamma, split);
     }
 
     /// <summary>Bubble temperature at P, or false when the solver does not converge.</summary>
@@ -284,8 +294,10 @@ public sealed partial class PhaseEquilibrium
 
     private double[] Gamma(double temperatureK, double[] x)
     {
-        var lnGamma = Model.Model.LnActivityCoefficients(temperatureK, x);
-        return lnGamma.Select(Math.Exp).ToArray();
+        var gamma = new double[x.Length];
+        Model.Model.LnActivityCoefficients(temperatureK, x, gamma);
+        for (int i = 0; i < gamma.Length; i++) gamma[i] = Math.Exp(gamma[i]);
+        return gamma;
     }
 
     /// <summary>Brackets the root of an increasing residual r(T) by stepping outward from the

@@ -277,7 +277,8 @@ public sealed class Unifac : IActivityModel
 
         int g = _groups, n = ComponentCount;
         var psi = new double[g * g];
-        for (int m = 0; m < g * g; m++) psi[m] = _interaction[m].Psi(temperatureK);
+        // Groups of one main group do not interact: ψ = exp(0) = 1 exactly, without the exponential.
+        for (int m = 0; m < g * g; m++) psi[m] = _interaction[m] == default ? 1.0 : _interaction[m].Psi(temperatureK);
         var pure = new double[n];
         Span<double> x = stackalloc double[n];
         Span<double> groupLnGamma = stackalloc double[g];

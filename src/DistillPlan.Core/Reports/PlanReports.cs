@@ -72,7 +72,9 @@ public static class PlanReports
             Assumptions = p.Assumptions,
             Sources = Sources(p, context),
             Cautions = Checks.Cautions.For(p.Equipment, p.System.Components),
-            Plots = [CurvePlot(p), .. p.Ramp is StripPlan r && r.Steps.Count > 1 ? [RampPlot(r)] : Array.Empty<Plot>()],
+            // Drawn only for --plot or an export: the curve is 61 bubble points that the text,
+            // JSON and Markdown reports do not show.
+            Plots = new DeferredList<Plot>(() => [CurvePlot(p), .. p.Ramp is StripPlan r && r.Steps.Count > 1 ? [RampPlot(r)] : Array.Empty<Plot>()]),
         };
     }
 

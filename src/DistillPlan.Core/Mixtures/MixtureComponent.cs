@@ -64,8 +64,8 @@ public sealed class MixtureComponent
         ArgumentNullException.ThrowIfNull(solvent);
         var curves = solvent.VaporPressure;
         return new MixtureComponent(solvent.Name, solvent.MolarMassGPerMol,
-            t => curves.SaturationPressure(t).PressurePa, solvent.UnifacGroups, solvent.LiquidDensityKgPerM3,
-            t => curves.SaturationPressure(t).Extrapolated)
+            curves.SaturationPressurePa, solvent.UnifacGroups, solvent.LiquidDensityKgPerM3,
+            curves.IsExtrapolated)
         {
             Cas = string.IsNullOrWhiteSpace(solvent.Cas) ? null : solvent.Cas,
             MeltingPointK = solvent.MeltingPointK,

@@ -93,6 +93,23 @@ public sealed class VaporPressureModel
     /// <summary>Saturation pressure at T; flagged when extrapolated; refuses above Tc.</summary>
     public PsatResult SaturationPressure(double temperatureK)
     {
+        double p = Answer(temperatureK, out var major, out var minor);
+        return new PsatResult(p, temperatureK, major, !Covered(temperatureK), minor);
+    }
+
+    /// <summary>
+    /// Saturation pressure [Pa] at T [K], as <see cref="SaturationPressure"/> gives it, without
+    /// the account of which curve answered: a mixture's bubble points ask for it thousands of
+    /// times, and the account cost as much as the number.
+    /// </summary>
+    public double SaturationPressurePa(double temperatureK) => Answer(temperatureK, out _, out _);
+
+    /// <summary>Whether <paramref name="temperatureK"/> lies outside every curve's range.</summary>
+    public bool IsExtrapolated(double temperatureK) => !Covered(temperatureK);
+
+    // Loops, not LINQ: no allocation on a path a strip runs hundreds of thousands of times.
+    private double Answer(double temperatureK, out IVaporPressureCurve major, out IVaporPressureCurve? minor)
+    {
         if (!(temperatureK > 0))
             throw new InputException("temperature", $"{temperatureK} K", "a temperature above absolute zero");
         if (CriticalTemperatureK is double tc && temperatureK > tc)
@@ -104,25 +121,37 @@ public sealed class VaporPressureModel
                 $"{temperatureK - PhysicalConstants.ZeroCelsiusK:F1} °C is above the estimated critical temperature " +
                 $"{etc - PhysicalConstants.ZeroCelsiusK:F1} °C (no Tc is published in the library); no vapour pressure is given there");
 
-        foreach (var band in _bands)
-            if (band.Contains(temperatureK))
-            {
-                double s = band.Weight(temperatureK);
-                double lnP = (1 - s) * ExtendedLnP(band.From, temperatureK) + s * ExtendedLnP(band.To, temperatureK);
-                var (major, minor) = s < 0.5 ? (band.From, band.To) : (band.To, band.From);
-                return new PsatResult(Math.Exp(lnP), temperatureK, major, !Curves.Any(c => c.Covers(temperatureK)), minor);
-            }
+        for (int i = 0; i < _bands.Count; i++)
+        {
+            var band = _bands[i];
+            if (!band.Contains(temperatureK)) continue;
+            double s = band.Weight(temperatureK);
+            double lnP = (1 - s) * ExtendedLnP(band.From, temperatureK) + s * ExtendedLnP(band.To, temperatureK);
+            (major, minor) = s < 0.5 ? (band.From, band.To) : (band.To, band.From);
+            return Math.Exp(lnP);
+        }
 
+        minor = null;
         if (SegmentCurve(temperatureK) is { } curve)
-            return new PsatResult(Math.Exp(ExtendedLnP(curve, temperatureK)), temperatureK, curve, !Curves.Any(c => c.Covers(temperatureK)));
+        {
+            major = curve;
+            return Math.Exp(ExtendedLnP(curve, temperatureK));
+        }
 
         // Outside every range: extend along ln P = a − b/T the curve that answers at that edge of
         // the segments, so P(T) stays continuous and rising across the edge (extending another
         // curve that merely reaches a little further made cyclohexane's P drop by 1 % at 279.69 K).
-        var nearest = _segments.Count > 0
+        major = _segments.Count > 0
             ? (temperatureK < _segments[0].LoK ? _segments[0].Curve : _segments[^1].Curve)
             : Curves.MinBy(c => DistanceOutside(c, temperatureK))!;
-        return new PsatResult(Math.Exp(ExtendedLnP(nearest, temperatureK)), temperatureK, nearest, true);
+        return Math.Exp(ExtendedLnP(major, temperatureK));
+    }
+
+    private bool Covered(double temperatureK)
+    {
+        for (int i = 0; i < Curves.Count; i++)
+            if (Curves[i].Covers(temperatureK)) return true;
+        return false;
     }
 
     /// <summary>Saturation (boiling) temperature at P; flagged when extrapolated; refuses above Pc.</summary>
@@ -157,7 +186,12 @@ public sealed class VaporPressureModel
         return new TsatResult(root, pressurePa, at.Curve, at.Extrapolated);
     }
 
-    private IVaporPressureCurve? SegmentCurve(double temperatureK) => _segments.FirstOrDefault(s => s.Contains(temperatureK))?.Curve;
+    private IVaporPressureCurve? SegmentCurve(double temperatureK)
+    {
+        for (int i = 0; i < _segments.Count; i++)
+            if (_segments[i].Contains(temperatureK)) return _segments[i].Curve;
+        return null;
+    }
 
     private static double DistanceOutside(IVaporPressureCurve c, double t) =>
         t < c.TMinK ? c.TMinK - t : t > c.TMaxK ? t - c.TMaxK : 0;

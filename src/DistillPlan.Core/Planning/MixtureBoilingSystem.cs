@@ -59,23 +59,45 @@ public sealed class MixtureBoilingSystem : IBoilingSystem
 
     private AzeotropeSurvey Survey(double pressurePa)
     {
+        var parts = Equilibrium.Components;
+        var pairs = new List<(int I, int J)>();
+        for (int i = 0; i < parts.Count; i++)
+            for (int j = i + 1; j < parts.Count; j++) pairs.Add((i, j));
+
+        // The pairs are independent searches (each its own equilibrium and model, nothing
+        // shared that changes), so they run side by side on a machine with more than one core;
+        // the results are put together in pair order, so the answer does not depend on it.
+        var results = new (AzeotropeSearchResult? Result, string? Problem)[pairs.Count];
+        void Search(int k)
+        {
+            var (i, j) = pairs[k];
+            var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Equilibrium.Model.Requested);
+            try { results[k] = (AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100), null); }
+            // A search whose solver gives up is reported as "not evaluated", never as an internal error.
+            catch (Exception e) when (e is DistillPlanException or MathNet.Numerics.NonConvergenceException) { results[k] = (null, e.Message); }
+        }
+        if (pairs.Count > 1 && Environment.ProcessorCount > 1)
+        {
+            // Anything else a search throws is a fault: let it surface as itself, as without threads.
+            try { Parallel.For(0, pairs.Count, Search); }
+            catch (AggregateException e) when (e.InnerExceptions.Count > 0)
+            {
+                System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            }
+        }
+        else for (int k = 0; k < pairs.Count; k++) Search(k);
+
         var found = new List<Azeotrope>();
         var problems = new List<string>();
         var notes = new List<string>();
-        var parts = Equilibrium.Components;
-        for (int i = 0; i < parts.Count; i++)
-            for (int j = i + 1; j < parts.Count; j++)
-            {
-                var pair = PhaseEquilibrium.Create([parts[i], parts[j]], Equilibrium.Model.Requested);
-                try
-                {
-                    var result = AzeotropeSearch.Find(pair, pressurePa, gridIntervals: 100);
-                    found.AddRange(result.Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025));
-                    if (result.UsesPublishedValue && result.Note is string n) notes.Add($"{parts[i].Name}–{parts[j].Name}: {n}");
-                }
-                // A search whose solver gives up is reported as "not evaluated", never as an internal error.
-                catch (Exception e) when (e is DistillPlanException or MathNet.Numerics.NonConvergenceException) { problems.Add($"{parts[i].Name}–{parts[j].Name}: {e.Message}"); }
-            }
+        for (int k = 0; k < pairs.Count; k++)
+        {
+            var (i, j) = pairs[k];
+            var (result, problem) = results[k];
+            if (problem is not null) { problems.Add($"{parts[i].Name}–{parts[j].Name}: {problem}"); continue; }
+            found.AddRange(result!.Azeotropes.Where(a => a.MoleFractions.Values.Min() >= 0.025));
+            if (result.UsesPublishedValue && result.Note is string n) notes.Add($"{parts[i].Name}–{parts[j].Name}: {n}");
+        }
         return new(found, problems.Count == 0 ? null : "the azeotrope search failed for " + string.Join("; ", problems), notes);
     }
 }

@@ -32,9 +32,12 @@ internal sealed class RayleighStrip
     }
 
     private sealed class StripEvent(string name, Func<Snapshot, double> remaining, StripEndReason? endReason,
-        Func<Snapshot, string> message)
+        Func<Snapshot, string> message, bool amountsOnly = false)
     {
         public string Name { get; } = name;
+        /// <summary>The distance reads only the amounts (S and U), not the equilibrium: it is
+        /// located without a bubble point per trial length.</summary>
+        public bool AmountsOnly { get; } = amountsOnly;
         public Func<Snapshot, double> Remaining { get; } = remaining;
         public StripEndReason? EndReason { get; } = endReason;  // null: a report event
         public Func<Snapshot, string> Message { get; } = message;
@@ -171,10 +174,10 @@ internal sealed class RayleighStrip
         string basis = _options.Basis == StripBasis.Moles ? "by moles" : "by volume";
         if (_options.StopAtFractionLeft is { } left)
             ends.Add(new("fraction left", s => FractionLeft(s.U) - left, StripEndReason.FractionLeftReached,
-                _ => $"{left:P1} of the charge ({basis}) is left"));
+                _ => $"{left:P1} of the charge ({basis}) is left", amountsOnly: true));
         if (_options.MinimumResidueFraction is { } residue)
             ends.Add(new("minimum residue", s => FractionLeft(s.U) - residue, StripEndReason.MinimumResidueReached,
-                _ => $"minimum residue reached: {residue:P1} of the charge ({basis}) is kept; do not evaporate further"));
+                _ => $"minimum residue reached: {residue:P1} of the charge ({basis}) is kept; do not evaporate further", amountsOnly: true));
         if (_options.StopAtResidualMoleFraction is { } target)
         {
             int k = _equilibrium.IndexOf(target.Component);
@@ -196,7 +199,7 @@ internal sealed class RayleighStrip
     {
         var reports = new List<StripEvent>
         {
-            new("evaporated fraction", s => nextReport() - EvaporatedFraction(s.U), null, _ => ""),
+            new("evaporated fraction", s => nextReport() - EvaporatedFraction(s.U), null, _ => "", amountsOnly: true),
         };
         if (_options.ReportPressureRatio is { } ratio)
             reports.Add(new("pressure ratio", s => Math.Log(s.PressurePa / (referencePa() * ratio)), null, _ => ""));
@@ -212,10 +215,13 @@ internal sealed class RayleighStrip
     /// (usually two); Brent on real steps over the whole step is the fallback.</remarks>
     private double Locate(StripEvent e, Snapshot from, Snapshot to, double[][] stages, double h)
     {
+        // An event on the amounts alone needs no bubble point at the trial state: the same
+        // distances, so the same root, for a seventh of the evaluations.
+        Snapshot At(double s, double[] u) => e.AmountsOnly ? new Snapshot(s, u, double.NaN, double.NaN, [], []) : Evaluate(s, u);
         double Real(double length) =>
-            e.Remaining(Evaluate(from.S + length, DormandPrince45.Step(Derivative, from.S, from.U, length).Next));
+            e.Remaining(At(from.S + length, DormandPrince45.Step(Derivative, from.S, from.U, length).Next));
         double Dense(double length) =>
-            e.Remaining(Evaluate(from.S + length, DormandPrince45.Interpolate(from.U, to.U, stages, h, length / h)));
+            e.Remaining(At(from.S + length, DormandPrince45.Interpolate(from.U, to.U, stages, h, length / h)));
         double tolerance = Math.Max(h * 1e-12, MinimumStep);
         if (e.Remaining(to) == 0) return h;
         if (Polished(Real, Dense, h, tolerance) is { } polished) return polished;

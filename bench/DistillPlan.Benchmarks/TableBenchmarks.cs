@@ -17,8 +17,8 @@ public class TableBenchmarks
     [GlobalSetup]
     public void Setup()
     {
-        _unifac = UnifacParameters.ShippedResources.Select(UnifacParameters.ReadResource).ToArray();
-        _facts = UnifacParameters.ReadResource(PublishedMixtureFacts.ShippedResource);
+        _unifac = UnifacParameters.ShippedResources.Select(TableText.ReadResource).ToArray();
+        _facts = TableText.ReadResource(PublishedMixtureFacts.ShippedResource);
     }
 
     /// <summary>The three UNIFAC tables (original, Dortmund, LLE) through YamlDotNet.</summary>

@@ -1,5 +1,12 @@
 namespace DistillPlan.Core.Library;
 
+/// <summary>A library file's citations and its entries, read or still to be read.</summary>
+internal sealed record IndexedLibrary(IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries)
+{
+    /// <summary>A file already read whole: every entry is read.</summary>
+    public static IndexedLibrary Read(LibraryFile file) => new(file.Sources, file.Solvents.Select(s => new LibraryEntry(s)).ToList());
+}
+
 /// <summary>
 /// One solvent of a library: the names it is found by, where it is written, and the entry
 /// itself, which an indexed file reads and validates only when it is first used (a plan of
@@ -21,7 +28,7 @@ internal sealed class LibraryEntry
     /// every use. <paramref name="wholeFile"/> reads the entry's whole file at once, for when
     /// every entry is wanted.
     /// </summary>
-    public LibraryEntry(string name, string cas, IReadOnlyList<string> aliases, string origin, Func<Solvent> read, Lazy<LibraryFile>? wholeFile = null)
+    public LibraryEntry(string name, string cas, IReadOnlyList<string> aliases, string origin, Func<Solvent> read, Lazy<LibraryFile> wholeFile)
     {
         WholeFile = wholeFile;
         Name = name;

@@ -16,8 +16,12 @@ namespace DistillPlan.Core.Library;
 internal static class LibraryTextIndex
 {
     /// <summary>The header's sources and an entry per list item, or null when the layout is not the simple one.</summary>
-    public static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries)? TryRead(
-        string text, string file, Func<string, string, IReadOnlyDictionary<string, string>, int, int, Solvent> readEntry, Lazy<LibraryFile> wholeFile)
+    /// <param name="text">The file's text.</param>
+    /// <param name="file">The file's name, for messages and origins.</param>
+    /// <param name="readEntry">Reads one entry: its text, the sources, its first line (0-based) and its index.</param>
+    /// <param name="wholeFile">The file read whole, for when every entry is wanted.</param>
+    public static IndexedLibrary? TryRead(
+        string text, string file, Func<string, IReadOnlyDictionary<string, string>, int, int, Solvent> readEntry, Lazy<LibraryFile> wholeFile)
     {
         var lines = Lines(text);
         int list = lines.FindIndex(l => IsSolventsKey(l.Text));
@@ -39,18 +43,17 @@ internal static class LibraryTextIndex
         for (int i = 0; i < items.Count; i++)
         {
             int first = items[i], end = i + 1 < items.Count ? items[i + 1] : lines.Count;
-            var keys = Keys(lines, first, end);
-            if (keys is null) return null;
-            // Two entries sharing a name: the whole-file parse says which, with both lines.
-            foreach (string k in new[] { keys.Value.Name, keys.Value.Cas }.Concat(keys.Value.Aliases).Where(k => k.Length > 0))
-                if (!owners.Add(SolventLibrary.Normalise(k))) return null;
+            if (Keys(lines, first, end) is not var (name, cas, aliases)) return null;
             int startChar = lines[first].Start, endChar = end < lines.Count ? lines[end].Start : text.Length;
             string entryText = text[startChar..endChar];
             int index = i, firstLine = first;
-            entries.Add(new LibraryEntry(keys.Value.Name, keys.Value.Cas, keys.Value.Aliases, $"{file}:{first + 1}",
-                () => readEntry(entryText, file, sources, firstLine, index), wholeFile));
+            var entry = new LibraryEntry(name, cas, aliases, $"{file}:{first + 1}", () => readEntry(entryText, sources, firstLine, index), wholeFile);
+            // Two entries sharing a name: the whole-file parse says which, with both lines.
+            foreach (string k in entry.Keys)
+                if (!owners.Add(SolventLibrary.Normalise(k))) return null;
+            entries.Add(entry);
         }
-        return (sources, entries);
+        return new IndexedLibrary(sources, entries);
     }
 
     // A line as a range of the text (no copy: the shipped file has 1,500 lines and copying them

@@ -67,8 +67,8 @@ public sealed class SolventLibrary
     /// <summary>Reads one library file on its own.</summary>
     public static SolventLibrary Load(string path)
     {
-        var file = SolventYamlLoader.Load(path);
-        return new SolventLibrary(Read(file.Solvents), file.Sources, [path]);
+        var file = IndexedLibrary.Read(SolventYamlLoader.Load(path));
+        return new SolventLibrary(file.Entries, file.Sources, [path]);
     }
 
     /// <summary>
@@ -78,16 +78,9 @@ public sealed class SolventLibrary
     /// </summary>
     public static SolventLibrary LoadIndexed(string path)
     {
-        var file = ReadIndexed(path);
+        var file = SolventYamlLoader.LoadIndexed(path);
         return new SolventLibrary(file.Entries, file.Sources, [path]);
     }
-
-    private static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries) ReadIndexed(string path) =>
-        SolventYamlLoader.ParseIndexed(
-            YamlFileReader.ReadText(path, SolventYamlLoader.MaxFileBytes, (line, field, problem) => new LibraryFormatException(path, line, field, problem)),
-            path);
-
-    private static List<LibraryEntry> Read(IEnumerable<Solvent> solvents) => solvents.Select(s => new LibraryEntry(s)).ToList();
 
     /// <summary>
     /// The shipped library merged with the user's: <paramref name="userPath"/> when given
@@ -128,9 +121,9 @@ public sealed class SolventLibrary
 
     // The shipped library is indexed, not read whole: LibraryTextIndex says why. Its entries are
     // checked all together by the library's own tests (LibraryIntegrityTests).
-    private static ((IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries) File, string Name) ReadShipped()
+    private static (IndexedLibrary File, string Name) ReadShipped()
     {
-        if (FindShipped() is string path) return (ReadIndexed(path), path);
+        if (FindShipped() is string path) return (SolventYamlLoader.LoadIndexed(path), path);
         using var stream = typeof(SolventLibrary).Assembly.GetManifestResourceStream(BuiltInResource)
             ?? throw new LibraryFormatException(FileName, 0, "file", "the shipped solvent library is not built into this program and was not found next to it or above it");
         using var reader = new StreamReader(stream);

@@ -32,9 +32,16 @@ public static class SolventYamlLoader
     /// <param name="knownSources">Source keys defined elsewhere (the shipped file), usable by a user file.</param>
     public static LibraryFile Load(string path, IReadOnlyDictionary<string, string>? knownSources = null)
     {
-        string text = YamlFileReader.ReadText(path, MaxFileBytes, (line, field, problem) => new LibraryFormatException(path, line, field, problem));
-        return Parse(text, path, knownSources);
+        return Parse(ReadText(path), path, knownSources);
     }
+
+    /// <summary>Reads one file indexed (<see cref="ParseIndexed"/>): each entry is validated when first used.</summary>
+    internal static IndexedLibrary LoadIndexed(string path) => ParseIndexed(ReadText(path), path);
+
+    private static string ReadText(string path) => YamlFileReader.ReadText(path, MaxFileBytes, ProblemIn(path));
+
+    // Every problem of a library file is a LibraryFormatException naming the file.
+    private static YamlProblem ProblemIn(string file) => (line, field, problem) => new LibraryFormatException(file, line, field, problem);
 
     /// <summary>Largest library file read: the shipped one is about 100 kB.</summary>
     public const long MaxFileBytes = 8 << 20;
@@ -42,7 +49,7 @@ public static class SolventYamlLoader
     /// <summary>Parses library text; <paramref name="file"/> is used in messages.</summary>
     public static LibraryFile Parse(string text, string file, IReadOnlyDictionary<string, string>? knownSources = null)
     {
-        var rootNode = YamlFileReader.Parse(text, (line, field, problem) => new LibraryFormatException(file, line, field, problem))
+        var rootNode = YamlFileReader.Parse(text, ProblemIn(file))
             ?? throw new LibraryFormatException(file, 1, "file", "the file is empty");
 
         var root = new YamlCursor(rootNode, "", file);
@@ -84,22 +91,20 @@ public static class SolventYamlLoader
     /// The library's header and an entry per solvent, each read and validated when first used
     /// (<see cref="LibraryTextIndex"/>); a file of another layout is read whole, as by <see cref="Parse"/>.
     /// </summary>
-    internal static (IReadOnlyDictionary<string, string> Sources, IReadOnlyList<LibraryEntry> Entries) ParseIndexed(string text, string file)
+    internal static IndexedLibrary ParseIndexed(string text, string file)
     {
         // Every entry read one by one costs five times one read of the whole file: a list of all
         // solvents reads the file whole, and entries not read yet are taken from that.
         var whole = new Lazy<LibraryFile>(() => Parse(text, file), LazyThreadSafetyMode.ExecutionAndPublication);
-        Solvent Read(string entryText, string f, IReadOnlyDictionary<string, string> sources, int firstLine, int index) =>
-            whole.IsValueCreated ? whole.Value.Solvents[index] : ReadEntry(entryText, f, sources, firstLine, index);
-        if (LibraryTextIndex.TryRead(text, file, Read, whole) is { } indexed) return indexed;
-        var all = Parse(text, file);
-        return (all.Sources, all.Solvents.Select(s => new LibraryEntry(s)).ToList());
+        Solvent Read(string entryText, IReadOnlyDictionary<string, string> sources, int firstLine, int index) =>
+            whole.IsValueCreated ? whole.Value.Solvents[index] : ReadEntry(entryText, file, sources, firstLine, index);
+        return LibraryTextIndex.TryRead(text, file, Read, whole) ?? IndexedLibrary.Read(Parse(text, file));
     }
 
     /// <summary>The sources of a library's header (the text before its <c>solvents:</c> key); null when it is empty.</summary>
     internal static IReadOnlyDictionary<string, string>? ParseHeader(string header, string file)
     {
-        var node = YamlFileReader.Parse(header, (line, field, problem) => new LibraryFormatException(file, line, field, problem));
+        var node = YamlFileReader.Parse(header, ProblemIn(file));
         if (node is null) return null;
         var root = new YamlCursor(node, "", file);
         root.OnlyKeys("format", "sources");
@@ -109,7 +114,7 @@ public static class SolventYamlLoader
     // One entry's lines, parsed with the blank lines above it so that YAML's line numbers are the file's.
     private static Solvent ReadEntry(string entryText, string file, IReadOnlyDictionary<string, string> sources, int firstLine, int index)
     {
-        var node = YamlFileReader.Parse(new string('\n', firstLine) + entryText, (line, field, problem) => new LibraryFormatException(file, line, field, problem));
+        var node = YamlFileReader.Parse(new string('\n', firstLine) + entryText, ProblemIn(file));
         if (node is not YamlSequenceNode { Children.Count: 1 } list)
             throw new LibraryFormatException(file, firstLine + 1, $"solvents[{index}]", "expected one solvent entry");
         return ReadSolvent(new YamlCursor(list.Children[0], $"solvents[{index}]", file), sources);

@@ -108,11 +108,7 @@ public sealed class PublishedMixtureFacts
     public PublishedAzeotropeFact? AnyAzeotropeOf(MixtureComponent a, MixtureComponent b)
         => Azeotropes.FirstOrDefault(f => MiscibilityFact.IsPair(f.FirstCas, f.SecondCas, a.Cas, b.Cas));
 
-    private static PublishedMixtureFacts Load()
-    {
-        string text = UnifacParameters.ReadResource(Resource);
-        return FromTable(FlowTableReader.TryRead(text) ?? YamlTableReader.Read(new StringReader(text), Resource), Resource);
-    }
+    private static PublishedMixtureFacts Load() => FromTable(TableText.Read(TableText.ReadResource(Resource), Resource), Resource);
 
     /// <summary>Resource name of the shipped facts (for the readers' tests and benchmarks).</summary>
     internal const string ShippedResource = Resource;

@@ -20,6 +20,20 @@ internal sealed record TableEntry(string? Scalar = null, IReadOnlyList<TableRow>
 /// </summary>
 internal sealed class TableText(IReadOnlyDictionary<string, TableEntry> entries)
 {
+    /// <summary>Reads table text with the quick reader when it has the shipped files' restricted
+    /// shape, with YamlDotNet otherwise: the same table, or the same error, either way.</summary>
+    public static TableText Read(string text, string origin)
+        => FlowTableReader.TryRead(text) ?? YamlTableReader.Read(new StringReader(text), origin);
+
+    /// <summary>The text of a table embedded in Core (the UNIFAC tables, the mixture facts).</summary>
+    public static string ReadResource(string resource)
+    {
+        using var stream = typeof(TableText).Assembly.GetManifestResourceStream(resource)
+            ?? throw new InvalidOperationException($"embedded resource {resource} is missing from the build");
+        using var reader = new StreamReader(stream);
+        return reader.ReadToEnd();
+    }
+
     /// <summary>Every top-level key and its value, for the readers' tests.</summary>
     public IReadOnlyDictionary<string, TableEntry> Entries => entries;
 

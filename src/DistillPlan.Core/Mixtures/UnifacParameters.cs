@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Reflection;
 
 namespace DistillPlan.Core.Mixtures;
 
@@ -179,10 +178,8 @@ public sealed class UnifacParameters
     public static UnifacParameters Parse(TextReader reader, string origin)
         => FromTable(YamlTableReader.Read(reader, origin), origin);
 
-    /// <summary>Reads table text with the quick reader when it has the shipped tables' restricted
-    /// shape, with YamlDotNet otherwise: the same table, or the same error, either way.</summary>
-    internal static UnifacParameters ParseText(string text, string origin)
-        => FromTable(FlowTableReader.TryRead(text) ?? YamlTableReader.Read(new StringReader(text), origin), origin);
+    /// <summary>Reads table text by <see cref="TableText.Read"/>: the same table, or the same error, whichever reader reads it.</summary>
+    internal static UnifacParameters ParseText(string text, string origin) => FromTable(TableText.Read(text, origin), origin);
 
     /// <summary>The table's checks and content, whichever reader read the text.</summary>
     internal static UnifacParameters FromTable(TableText root, string origin)
@@ -249,16 +246,7 @@ public sealed class UnifacParameters
         return new UnifacParameters(model, variant, source, subgroups, interactions, assignments);
     }
 
-    private static UnifacParameters Load(string resource) => ParseText(ReadResource(resource), resource);
-
-    /// <summary>The text of an embedded table (for the readers' tests and benchmarks).</summary>
-    internal static string ReadResource(string resource)
-    {
-        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(resource)
-            ?? throw new InvalidOperationException($"embedded resource {resource} is missing from the build");
-        using var reader = new StreamReader(stream);
-        return reader.ReadToEnd();
-    }
+    private static UnifacParameters Load(string resource) => ParseText(TableText.ReadResource(resource), resource);
 
     /// <summary>Resource names of the shipped tables: original, Dortmund, LLE.</summary>
     internal static IReadOnlyList<string> ShippedResources { get; } = [OriginalResource, DortmundResource, LleResource];

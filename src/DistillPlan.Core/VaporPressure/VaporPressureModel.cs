@@ -94,7 +94,7 @@ public sealed class VaporPressureModel
     public PsatResult SaturationPressure(double temperatureK)
     {
         double p = Answer(temperatureK, out var major, out var minor);
-        return new PsatResult(p, temperatureK, major, !Covered(temperatureK), minor);
+        return new PsatResult(p, temperatureK, major, IsExtrapolated(temperatureK), minor);
     }
 
     /// <summary>
@@ -105,7 +105,12 @@ public sealed class VaporPressureModel
     public double SaturationPressurePa(double temperatureK) => Answer(temperatureK, out _, out _);
 
     /// <summary>Whether <paramref name="temperatureK"/> lies outside every curve's range.</summary>
-    public bool IsExtrapolated(double temperatureK) => !Covered(temperatureK);
+    public bool IsExtrapolated(double temperatureK)
+    {
+        for (int i = 0; i < Curves.Count; i++)
+            if (Curves[i].Covers(temperatureK)) return false;
+        return true;
+    }
 
     // Loops, not LINQ: no allocation on a path a strip runs hundreds of thousands of times.
     private double Answer(double temperatureK, out IVaporPressureCurve major, out IVaporPressureCurve? minor)
@@ -145,13 +150,6 @@ public sealed class VaporPressureModel
             ? (temperatureK < _segments[0].LoK ? _segments[0].Curve : _segments[^1].Curve)
             : Curves.MinBy(c => DistanceOutside(c, temperatureK))!;
         return Math.Exp(ExtendedLnP(major, temperatureK));
-    }
-
-    private bool Covered(double temperatureK)
-    {
-        for (int i = 0; i < Curves.Count; i++)
-            if (Curves[i].Covers(temperatureK)) return true;
-        return false;
     }
 
     /// <summary>Saturation (boiling) temperature at P; flagged when extrapolated; refuses above Pc.</summary>

@@ -25,7 +25,7 @@ public class TableReaderTests
     [MemberData(nameof(ShippedFiles))]
     public void The_quick_reader_reads_every_shipped_file_exactly_as_YamlDotNet_does(string resource)
     {
-        string text = UnifacParameters.ReadResource(resource);
+        string text = TableText.ReadResource(resource);
         var fast = FlowTableReader.TryRead(text);
         Assert.NotNull(fast); // the shipped files are of the restricted shape: no fallback
         var yaml = YamlTableReader.Read(new StringReader(text), resource);
@@ -36,7 +36,7 @@ public class TableReaderTests
     [MemberData(nameof(ShippedTables))]
     public void Both_paths_give_the_same_table_in_every_field_and_row(string resource)
     {
-        string text = UnifacParameters.ReadResource(resource);
+        string text = TableText.ReadResource(resource);
         var fast = UnifacParameters.FromTable(FlowTableReader.TryRead(text)!, resource);
         var yaml = UnifacParameters.Parse(new StringReader(text), resource);
         Assert.Equal(Render(yaml), Render(fast));
@@ -50,7 +50,7 @@ public class TableReaderTests
     [Fact]
     public void Both_paths_give_the_same_mixture_facts()
     {
-        string resource = PublishedMixtureFacts.ShippedResource, text = UnifacParameters.ReadResource(resource);
+        string resource = PublishedMixtureFacts.ShippedResource, text = TableText.ReadResource(resource);
         var fast = PublishedMixtureFacts.FromTable(FlowTableReader.TryRead(text)!, resource);
         var yaml = PublishedMixtureFacts.FromTable(YamlTableReader.Read(new StringReader(text), resource), resource);
         Assert.Equal(string.Join("\n", yaml.Miscible), string.Join("\n", fast.Miscible));
@@ -75,7 +75,7 @@ public class TableReaderTests
     [InlineData("  - [\"67-64-1\",", "  - [\"67-64-1\", \"acetone\", \"1 1 9999 1\", \"DDBST\"]", "'9999 1' is not a known subgroup and a positive count")]
     public void A_broken_row_is_refused_with_the_same_message_and_its_line(string rowStart, string replacement, string expected)
     {
-        var (text, line) = ReplaceRow(UnifacParameters.ReadResource(Dortmund), rowStart, replacement);
+        var (text, line) = ReplaceRow(TableText.ReadResource(Dortmund), rowStart, replacement);
         Assert.NotNull(FlowTableReader.TryRead(text));
         var fast = Assert.Throws<FormatException>(() => UnifacParameters.ParseText(text, "t.yaml"));
         var yaml = Assert.Throws<FormatException>(() => UnifacParameters.Parse(new StringReader(text), "t.yaml"));
@@ -90,7 +90,7 @@ public class TableReaderTests
     [InlineData("  - [9, \"ACH\",", "  - [9, \"ACH\", 3, \"ACH, 0.3763, 0.4321]")]
     public void An_unterminated_quote_falls_back_to_YamlDotNet_and_its_error(string rowStart, string replacement)
     {
-        var (text, line) = ReplaceRow(UnifacParameters.ReadResource(Dortmund), rowStart, replacement);
+        var (text, line) = ReplaceRow(TableText.ReadResource(Dortmund), rowStart, replacement);
         var (fast, yaml) = BothFail(text);
         Assert.Equal(yaml.GetType(), fast.GetType());
         Assert.Equal(yaml.Message, fast.Message);
@@ -103,7 +103,7 @@ public class TableReaderTests
     [Fact]
     public void An_unclosed_row_falls_back_to_YamlDotNet_and_its_error()
     {
-        var (text, _) = ReplaceRow(UnifacParameters.ReadResource(Dortmund), "  - [9, \"ACH\",", "  - [9, \"ACH\", 3, \"ACH\", 0.3763, 0.4321");
+        var (text, _) = ReplaceRow(TableText.ReadResource(Dortmund), "  - [9, \"ACH\",", "  - [9, \"ACH\", 3, \"ACH\", 0.3763, 0.4321");
         var (fast, yaml) = BothFail(text);
         Assert.Equal(yaml.GetType(), fast.GetType());
         Assert.Equal(yaml.Message, fast.Message);
@@ -122,7 +122,7 @@ public class TableReaderTests
     [Fact]
     public void Damaged_tables_give_the_same_answer_on_both_paths()
     {
-        string text = UnifacParameters.ReadResource(Lle);
+        string text = TableText.ReadResource(Lle);
         var damage = Gen.Select(Gen.Int[0, text.Length - 1], Gen.Int[0, 4],
             Gen.Char["\"',[]{}#:-&*!|>%@`\\ \t\r\n0a.e+\uFEFF\u0085é"]);
         damage.Sample((at, kind, c) =>
